@@ -4,7 +4,12 @@ import { defineConfig } from "vitest/config";
 // Two projects: pure logic under node, components under happy-dom.
 // Integration tests (real PostgreSQL) have their own config: vitest.integration.config.ts.
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(__dirname) } },
+  resolve: {
+    alias: {
+      "@": path.resolve(__dirname),
+      "server-only": path.resolve(__dirname, "test/support/empty-module.ts"),
+    },
+  },
   test: {
     projects: [
       {

@@ -1,0 +1,58 @@
+#!/usr/bin/env bash
+# The one start command: installs what is missing, starts PostgreSQL and the fake mail server on
+# loopback, migrates, seeds the invented demo team, builds and serves Craquelure on $PORT.
+# Ctrl-C (or SIGTERM) stops everything it started; data stays in .data/ for the next start.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/common.sh
+
+PORT=${PORT:-3000}
+PGPORT=${CRAQUELURE_PG_PORT:-54329}
+SMTP_PORT=${SMTP_PORT:-2525}
+DATA_DIR=$(pwd)/.data
+
+export NEXT_TELEMETRY_DISABLED=1
+export NODE_ENV=production
+export DATABASE_URL=${DATABASE_URL:-postgres://app@127.0.0.1:$PGPORT/craquelure}
+export APP_URL=${APP_URL:-http://127.0.0.1:$PORT}
+export SMTP_HOST=127.0.0.1 SMTP_PORT
+export MAIL_FROM=${MAIL_FROM:-"Craquelure <no-reply@craquelure.local>"}
+export MAIL_OUTBOX_DIR=$DATA_DIR/outbox
+
+ensure_node_modules
+ensure_postgres_installed
+
+children=()
+cleanup() {
+  trap - INT TERM EXIT
+  log "stopping"
+  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  pg_cluster_stop "$DATA_DIR/pg"
+  log "stopped; data kept in .data/"
+}
+trap cleanup INT TERM EXIT
+
+pg_cluster_start "$DATA_DIR/pg" "$PGPORT"
+pg_create_db "$PGPORT" craquelure
+log "applying migrations"
+npm run --silent db:migrate
+npm run --silent db:seed
+
+mkdir -p "$MAIL_OUTBOX_DIR"
+npx tsx scripts/fake-smtp.ts &
+children+=($!)
+wait_for_port "$SMTP_PORT" 20 || die "fake mail server did not start"
+
+# Build when there is no build yet or a source file changed since the last one.
+if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib workers db public next.config.ts package-lock.json -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
+  log "building the app (about a minute)"
+  npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log" >&2; die "build failed (see .data/build.log)"; }
+fi
+
+npx next start -H 127.0.0.1 -p "$PORT" &
+children+=($!)
+wait_for_http "http://127.0.0.1:$PORT/" 60 || die "the app did not answer on port $PORT"
+log "Craquelure is running at http://127.0.0.1:$PORT  (mail outbox: http://127.0.0.1:$PORT/dev/outbox)"
+log "press Ctrl-C to stop"
+wait -n "${children[@]}" || true

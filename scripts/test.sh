@@ -1,0 +1,114 @@
+#!/usr/bin/env bash
+# The one test command: lint, format, types, unit tests, integration tests on a throwaway
+# PostgreSQL cluster, and browser tests in Debian's Chromium against a production build.
+# Ends with one plain line "N passed, N failed" summed over every suite.
+# Usage: scripts/test.sh [checks] [unit] [integration] [e2e]   (default: all)
+set -uo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/common.sh
+
+SUITES=${*:-checks unit integration e2e}
+want() { [[ " $SUITES " == *" $1 "* ]]; }
+
+export NEXT_TELEMETRY_DISABLED=1 NO_COLOR=1 FORCE_COLOR=0
+RUN_DIR=$(pwd)/.test-data/run-$$
+PGPORT=${TEST_PG_PORT:-$((55000 + $$ % 900))}
+SMTP_PORT=${TEST_SMTP_PORT:-$((26000 + $$ % 900))}
+APP_PORT=${TEST_APP_PORT:-$((31000 + $$ % 900))}
+REPORTS=$RUN_DIR/reports
+mkdir -p "$REPORTS" artifacts/screenshots
+
+passed=0
+failed=0
+children=()
+cleanup() {
+  for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  [ -n "${PGBIN:-}" ] && pg_cluster_stop "$RUN_DIR/pg"
+  rm -rf "$RUN_DIR"
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+# count_check NAME COMMAND...: a whole tool run counts as one test.
+count_check() {
+  local name=$1
+  shift
+  log "check: $name"
+  if "$@"; then passed=$((passed + 1)); else failed=$((failed + 1)); log "FAILED: $name"; fi
+}
+
+# run_vitest NAME CONFIG: run a vitest project and add its test counts.
+run_vitest() {
+  local name=$1 config=$2 report="$REPORTS/$1.json"
+  log "suite: $name"
+  npx vitest run --config "$config" --passWithNoTests --reporter=default --reporter=json \
+    --outputFile.json="$report"
+  local rc=$?
+  if [ -f "$report" ]; then
+    read -r p f < <(node -e 'const r=require(process.argv[1]);console.log(r.numPassedTests,r.numFailedTests+(r.numRuntimeErrorTests||0))' "$report")
+    passed=$((passed + p))
+    failed=$((failed + f))
+    if [ "$rc" -ne 0 ] && [ "$f" -eq 0 ]; then failed=$((failed + 1)); log "FAILED: $name exited $rc"; fi
+  else
+    failed=$((failed + 1))
+    log "FAILED: $name produced no report"
+  fi
+}
+
+ensure_node_modules
+
+if want checks; then
+  count_check "eslint" npx eslint . --max-warnings 0
+  count_check "prettier" npx prettier --check . --log-level warn
+  count_check "typescript" npx tsc --noEmit
+fi
+
+if want unit; then
+  run_vitest unit vitest.config.ts
+fi
+
+if want integration || want e2e; then
+  ensure_postgres_installed
+  pg_cluster_start "$RUN_DIR/pg" "$PGPORT" "-c fsync=off -c synchronous_commit=off -c full_page_writes=off"
+  pg_create_db "$PGPORT" craquelure_test
+  export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_test
+  export SMTP_HOST=127.0.0.1 SMTP_PORT
+  export MAIL_FROM="Craquelure tests <tests@craquelure.local>"
+  export MAIL_OUTBOX_DIR=$RUN_DIR/outbox
+  export APP_URL=http://127.0.0.1:$APP_PORT
+  mkdir -p "$MAIL_OUTBOX_DIR"
+  count_check "migrations apply" npm run --silent db:migrate
+  npx tsx scripts/fake-smtp.ts >"$RUN_DIR/smtp.log" 2>&1 &
+  children+=($!)
+  wait_for_port "$SMTP_PORT" 20 || log "fake mail server did not start"
+fi
+
+if want integration; then
+  run_vitest integration vitest.integration.config.ts
+fi
+
+if want e2e; then
+  ensure_chromium_installed
+  log "building the app for browser tests"
+  if NODE_ENV=production npx next build >"$RUN_DIR/build.log" 2>&1; then
+    passed=$((passed + 1))
+    npm run --silent db:seed >/dev/null
+    NODE_ENV=production npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+    children+=($!)
+    if wait_for_http "http://127.0.0.1:$APP_PORT/" 60; then
+      BASE_URL=http://127.0.0.1:$APP_PORT run_vitest e2e vitest.e2e.config.ts
+    else
+      failed=$((failed + 1))
+      log "FAILED: the app did not start"
+      tail -n 40 "$RUN_DIR/app.log" >&2
+    fi
+  else
+    failed=$((failed + 1))
+    log "FAILED: next build"
+    tail -n 60 "$RUN_DIR/build.log" >&2
+  fi
+fi
+
+echo "$passed passed, $failed failed"
+[ "$failed" -eq 0 ]

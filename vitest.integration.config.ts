@@ -1,0 +1,22 @@
+import path from "node:path";
+import { defineConfig } from "vitest/config";
+
+// Integration tests run against the real, already-migrated PostgreSQL that scripts/test.sh
+// starts (DATABASE_URL). `server-only` throws outside a React server bundle, so it is
+// replaced by an empty module here.
+export default defineConfig({
+  resolve: {
+    alias: {
+      "@": path.resolve(__dirname),
+      "server-only": path.resolve(__dirname, "test/support/empty-module.ts"),
+    },
+  },
+  test: {
+    name: "integration",
+    environment: "node",
+    include: ["test/integration/**/*.test.ts"],
+    fileParallelism: false,
+    testTimeout: 30_000,
+    hookTimeout: 60_000,
+  },
+});
