@@ -1,0 +1,45 @@
+import { eq } from "drizzle-orm";
+
+import type { Db } from "@/db/client";
+import { users, type User } from "@/db/schema/users";
+import { burnPasswordCheck, verifyPassword } from "@/lib/auth/password";
+import { AppError } from "@/lib/errors";
+import { enforceRateLimits, RATE_LIMITS } from "@/lib/rate-limit";
+import { signInSchema } from "@/lib/validations/auth";
+import { parseInput } from "@/lib/validations/parse";
+
+const WRONG = "That e-mail and password do not match an account.";
+
+/**
+ * Checks credentials under the per-account and per-address limits. Returns the user; the caller
+ * (a server action) opens the session. Unverified users may sign in: they can only use their
+ * account page and the sandbox until they confirm (teams require a confirmed address).
+ */
+export async function authenticate(
+  db: Db,
+  input: unknown,
+  clientAddress: string,
+  now: Date = new Date(),
+): Promise<User> {
+  const data = parseInput(signInSchema, input);
+  await enforceRateLimits(
+    db,
+    "sign-in",
+    [
+      { key: `sign-in:account:${data.email}`, rule: RATE_LIMITS.signInAccount },
+      { key: `sign-in:address:${clientAddress}`, rule: RATE_LIMITS.signInAddress },
+    ],
+    now,
+  );
+  const [user] = await db.select().from(users).where(eq(users.email, data.email));
+  if (!user) {
+    await burnPasswordCheck(data.password);
+    throw new AppError("invalid:credentials", WRONG, "password");
+  }
+  const ok = await verifyPassword(data.password, {
+    hash: user.passwordHash,
+    salt: user.passwordSalt,
+  });
+  if (!ok) throw new AppError("invalid:credentials", WRONG, "password");
+  return user;
+}
