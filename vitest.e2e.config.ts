@@ -2,7 +2,7 @@ import path from "node:path";
 import { defineConfig } from "vitest/config";
 
 // Browser tests drive Debian's Chromium through playwright-core against the production build
-// that scripts/test.sh serves at BASE_URL. One file at a time: the machine has two cores.
+// that scripts/test.sh serves at E2E_BASE_URL. One file at a time: the machine has two cores.
 export default defineConfig({
   resolve: { alias: { "@": path.resolve(__dirname) } },
   test: {

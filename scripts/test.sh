@@ -97,7 +97,7 @@ if want e2e; then
     NODE_ENV=production npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
     children+=($!)
     if wait_for_http "http://127.0.0.1:$APP_PORT/" 60; then
-      BASE_URL=http://127.0.0.1:$APP_PORT run_vitest e2e vitest.e2e.config.ts
+      E2E_BASE_URL=http://127.0.0.1:$APP_PORT run_vitest e2e vitest.e2e.config.ts
     else
       failed=$((failed + 1))
       log "FAILED: the app did not start"

@@ -25,8 +25,9 @@ export function chromiumPath(): string {
 }
 
 export function baseUrl(): string {
-  const url = process.env.BASE_URL;
-  if (!url) throw new Error("BASE_URL is not set: run browser tests through scripts/test.sh");
+  // Not BASE_URL: Vite (and so vitest) sets that variable to "/" itself.
+  const url = process.env.E2E_BASE_URL;
+  if (!url) throw new Error("E2E_BASE_URL is not set: run browser tests through scripts/test.sh");
   return url.replace(/\/$/, "");
 }
 
