@@ -1,0 +1,54 @@
+/**
+ * A first guess of which column is which, from English header names (units stripped). The user
+ * confirms or corrects it in the mapping step; the guess never decides silently.
+ */
+import { headerUnitText } from "./units";
+
+export const CHANNELS = [
+  "strain",
+  "stress",
+  "time",
+  "transverseStrain",
+  "shearStrain",
+  "shearStress",
+] as const;
+export type Channel = (typeof CHANNELS)[number];
+export type ColumnMapping = Partial<Record<Channel, number>>;
+
+// Most specific first: "shear strain" must not be taken for the axial strain.
+const PATTERNS: [Channel, RegExp][] = [
+  ["shearStrain", /shear.*strain|gamma|γ|gam(12)?\b|strain.*12|e12/],
+  ["shearStress", /shear.*stress|tau|τ|sig(ma)?.*12|s12/],
+  [
+    "transverseStrain",
+    /(transverse|lateral|width).*strain|strain.*(transverse|lateral|22|yy)|eps.*(22|yy)|e22/,
+  ],
+  ["time", /^(time|t|elapsed|sec|seconds)\b|time/],
+  ["strain", /strain|eps|ε|elongation|extension/],
+  ["stress", /stress|sigma|σ|force\s*\/\s*area|sig|load\s*\/\s*area/],
+];
+
+/** Header text without its unit and decoration, lower case. */
+export function headerName(header: string): string {
+  const unit = headerUnitText(header);
+  const bare = unit === null ? header : header.replace(/[[(][^\])]*[\])]\s*$/, "");
+  return bare.trim().toLowerCase();
+}
+
+export function suggestMapping(headers: string[], hasHeader: boolean): ColumnMapping {
+  const mapping: ColumnMapping = {};
+  if (!hasHeader) {
+    // Without names the usual order of a coupon export is strain, stress.
+    if (headers.length >= 2) Object.assign(mapping, { strain: 0, stress: 1 });
+    return mapping;
+  }
+  const taken = new Set<number>();
+  for (const [channel, pattern] of PATTERNS) {
+    const index = headers.findIndex((h, i) => !taken.has(i) && pattern.test(headerName(h)));
+    if (index >= 0) {
+      mapping[channel] = index;
+      taken.add(index);
+    }
+  }
+  return mapping;
+}

@@ -1,0 +1,163 @@
+/**
+ * Test-curve CSV → numeric columns (struct of arrays) with the physical line of every row.
+ * Pure string in, no DOM or Node APIs: it runs in a Web Worker. Limits are enforced before and
+ * while parsing, and the first fatal problem stops the parse (a file with an error yields nothing).
+ * A cell that is not a number is remembered per column rather than fatal here: a column of notes
+ * is harmless until someone maps it (see extract-points.ts).
+ */
+import Papa from "papaparse";
+import { csvError, type CsvError } from "./csv-error";
+import { detectDelimiter, type Delimiter } from "./detect-delimiter";
+import { MAX_COLUMNS, MAX_DATA_ROWS, MAX_FILE_BYTES, utf8ByteLength } from "./limits";
+import { looksLikeDecimalComma, parseNumberCell } from "./number-cell";
+
+export interface BadCell {
+  line: number;
+  raw: string;
+}
+
+export interface CurveTable {
+  headers: string[]; // from the header row, or "column 1", "column 2", …
+  hasHeader: boolean;
+  delimiter: Delimiter;
+  decimalComma: boolean;
+  rowCount: number;
+  columns: Float64Array[]; // NaN where a cell is not a number
+  lines: Int32Array; // 1-based physical line of each data row
+  firstBadCell: (BadCell | null)[]; // per column
+}
+
+export type TableResult = { ok: true; table: CurveTable } | { ok: false; error: CsvError };
+
+export interface ParseTableOptions {
+  delimiter?: Delimiter; // detected when absent
+  decimalComma?: boolean; // detected when absent
+}
+
+export function parseCurveTable(text: string, options: ParseTableOptions = {}): TableResult {
+  if (text.length > MAX_FILE_BYTES || utf8ByteLength(text) > MAX_FILE_BYTES) {
+    return fail(csvError("too-large", "The file is larger than 10 MB; split it or thin the rows."));
+  }
+  if (text.trim() === "") return fail(csvError("empty", "The file is empty."));
+  const delimiter = options.delimiter ?? detectDelimiter(text);
+  const decimalComma = options.decimalComma ?? detectDecimalComma(text, delimiter);
+  const builder = new TableBuilder(decimalComma);
+  let error: CsvError | null = null;
+  let newlines = 0;
+  let cursor = 0;
+  Papa.parse<string[]>(text, {
+    delimiter,
+    step: (step, parser) => {
+      const line = newlines + 1;
+      const end = step.meta.cursor;
+      for (let i = cursor; i < end; i++) if (text.charCodeAt(i) === 10) newlines++;
+      cursor = end;
+      const quoteError = step.errors.find((e) => e.type === "Quotes");
+      error = quoteError
+        ? csvError("quotes", 'a quoted cell is never closed properly (a lone ").', line)
+        : builder.add(step.data, line);
+      if (error) parser.abort();
+    },
+  });
+  return error ? fail(error) : builder.finish(delimiter);
+}
+
+function fail(error: CsvError): TableResult {
+  return { ok: false, error };
+}
+
+function detectDecimalComma(text: string, delimiter: Delimiter): boolean {
+  if (delimiter === ",") return false;
+  const sample = text.slice(0, 20_000).split("\n").slice(0, 50);
+  return sample.some((line) => line.split(delimiter).some(looksLikeDecimalComma));
+}
+
+/** Collects rows; returns the first structural error (ragged row, too many rows or columns). */
+class TableBuilder {
+  private headers: string[] | null = null;
+  private hasHeader = false;
+  private values: number[][] = [];
+  private lines: number[] = [];
+  private firstBadCell: (BadCell | null)[] = [];
+  private firstLine = 0;
+
+  constructor(private readonly decimalComma: boolean) {}
+
+  add(cells: string[], line: number): CsvError | null {
+    if (cells.length === 1 && cells[0].trim() === "") return null; // blank line
+    if (cells.length > MAX_COLUMNS) {
+      const count = cells.length.toLocaleString("en-US");
+      return csvError(
+        "too-many-columns",
+        `${count} cells; at most ${MAX_COLUMNS} columns are accepted.`,
+        line,
+      );
+    }
+    if (this.headers === null) return this.start(cells, line);
+    if (cells.length !== this.headers.length) {
+      return csvError(
+        "ragged",
+        `${cells.length} cells where line ${this.firstLine} has ${this.headers.length}; every row needs the same columns.`,
+        line,
+      );
+    }
+    if (this.lines.length >= MAX_DATA_ROWS) {
+      return csvError(
+        "too-many-rows",
+        `more than ${MAX_DATA_ROWS.toLocaleString("en-US")} data rows; thin the curve first.`,
+        line,
+      );
+    }
+    this.pushRow(cells, line);
+    return null;
+  }
+
+  private start(cells: string[], line: number): CsvError | null {
+    this.firstLine = line;
+    if (cells.length < 2) {
+      return csvError(
+        "delimiter",
+        "only one column found; separate columns with a comma, a semicolon or a tab.",
+        line,
+      );
+    }
+    this.hasHeader = cells.some((c) => parseNumberCell(c, this.decimalComma) === null);
+    this.headers = this.hasHeader
+      ? cells.map((c, i) => c.trim() || `column ${i + 1}`)
+      : cells.map((_, i) => `column ${i + 1}`);
+    this.values = cells.map(() => []);
+    this.firstBadCell = cells.map(() => null);
+    if (!this.hasHeader) this.pushRow(cells, line);
+    return null;
+  }
+
+  private pushRow(cells: string[], line: number) {
+    this.lines.push(line);
+    for (let j = 0; j < cells.length; j++) {
+      const value = parseNumberCell(cells[j], this.decimalComma);
+      if (value === null && this.firstBadCell[j] === null)
+        this.firstBadCell[j] = { line, raw: cells[j] };
+      this.values[j].push(value ?? Number.NaN);
+    }
+  }
+
+  finish(delimiter: Delimiter): TableResult {
+    if (this.headers === null) return fail(csvError("empty", "The file is empty."));
+    if (this.lines.length === 0) {
+      return fail(csvError("no-data", "a header but no data rows.", this.firstLine));
+    }
+    return {
+      ok: true,
+      table: {
+        headers: this.headers,
+        hasHeader: this.hasHeader,
+        delimiter,
+        decimalComma: this.decimalComma,
+        rowCount: this.lines.length,
+        columns: this.values.map((v) => Float64Array.from(v)),
+        lines: Int32Array.from(this.lines),
+        firstBadCell: this.firstBadCell,
+      },
+    };
+  }
+}
