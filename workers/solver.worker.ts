@@ -1,0 +1,36 @@
+/// <reference lib="webworker" />
+/**
+ * The solver worker: exposes the core over comlink and streams rows back as transferable
+ * chunks. No logic of its own beyond wiring; see lib/workbench/chunked-run.ts.
+ */
+import * as Comlink from "comlink";
+import { PathRun } from "@/lib/mechanics/driver";
+import type { Leg, MaterialParams, RunStatus } from "@/lib/mechanics/types";
+import { runInChunks } from "@/lib/workbench/chunked-run";
+import { chunkTransferables, type ResultChunk } from "@/lib/workbench/result-buffer";
+
+export interface SolverSink {
+  start(runId: number, totalRows: number): void;
+  chunk(runId: number, chunk: ResultChunk): void;
+}
+
+let sink: SolverSink | null = null;
+
+const api = {
+  connect(s: SolverSink) {
+    sink = s;
+  },
+  /** Runs the path; `scope` names the global scope it ran in (for the browser test). */
+  run(runId: number, params: MaterialParams, legs: Leg[]): { status: RunStatus; scope: string } {
+    const run = new PathRun(params, legs);
+    sink?.start(runId, run.columns.step.length);
+    const status = runInChunks(run, (chunk) =>
+      sink?.chunk(runId, Comlink.transfer(chunk, chunkTransferables(chunk))),
+    );
+    return { status, scope: Object.prototype.toString.call(self).slice(8, -1) };
+  },
+};
+
+export type SolverApi = typeof api;
+
+Comlink.expose(api);
