@@ -1,0 +1,203 @@
+/**
+ * One local step of spec C.4–C.5 from a converged state: elastic trial, onset frame (B.8),
+ * loading test, frozen-strain flags Hf, reduced Newton (reduced-newton.ts), post-checks.
+ * Never mutates `from`; writes the new state into `to` only when the step is accepted.
+ */
+import * as Evolution from "./evolution";
+import type { Material } from "./material";
+import { ReducedProblem } from "./reduced-newton";
+import * as StateLayout from "./state";
+
+// Bind imported names once: CommonJS transpilation (tsx, vitest) turns every access to an
+// imported binding into a getter call, which dominates a per-increment loop.
+const {
+  D1,
+  D2,
+  DP1,
+  DP2,
+  EPS,
+  EPS_P,
+  FRAME_SET,
+  PHI,
+  PSI,
+  REGIME,
+  SIG,
+  SIG_D,
+  TH,
+  TH_DEG,
+  W,
+  Y1,
+  Y2,
+} = StateLayout;
+const { evolutionF, releaseRate } = Evolution;
+
+/** Largest damage increment of one (sub-)step, spec C.5 (never waived). */
+export const DELTA_D_MAX = 0.05;
+
+export class LocalStepper {
+  readonly problem: ReducedProblem;
+  /** dissipation increment of the last accepted step (midpoint formula, spec C.5) */
+  dPhi = 0;
+  /** why the last step was rejected: '' | 'newton' | 'delta d' | 'frozen flag' | 'dissipation' */
+  rejection = "";
+
+  constructor(private readonly m: Material) {
+    this.problem = new ReducedProblem(m);
+  }
+
+  /**
+   * Local step to the prescribed values `tgt` (strain where bit k of `ctrl` is set, else stress).
+   * `atMinimum`: the sub-step is already hmin; then only the Δd post-check still applies
+   * (decision documented in README: the sign and dissipation checks are waived there).
+   */
+  step(from: Float64Array, ctrl: number, tgt: Float64Array, to: Float64Array, atMinimum: boolean) {
+    const m = this.m;
+    const pb = this.problem;
+    const s = pb.solver;
+    let th = from[TH];
+    let thDeg = from[TH_DEG];
+    let frameSet = from[FRAME_SET];
+    pb.ctrl = ctrl;
+    pb.tgt = tgt;
+    pb.dn1 = from[D1];
+    pb.dn2 = from[D2];
+    pb.dpn1 = from[DP1];
+    pb.dpn2 = from[DP2];
+    pb.Hf1 = 0;
+    pb.Hf2 = 0;
+    pb.iterations = 0;
+    this.rejection = "";
+    s.setAngle(th);
+    s.regime = from[REGIME];
+    pb.evaluate(pb.dn1, pb.dn2); // elastic trial (C.4.1)
+    let loading = pb.F1 > pb.dn1 || pb.F2 > pb.dn2;
+    if (m.onsetFrame && frameSet === 0) {
+      // C.4.2: before onset the response is frame-free; damage may only start through the onset
+      // test in the principal frame (decision: no growth in the unlocked parameter frame).
+      loading = false;
+      if (this.onsetTriggered()) {
+        th = 0.5 * Math.atan2(2 * s.sig[2], s.sig[0] - s.sig[1]);
+        thDeg = (th * 180) / Math.PI;
+        frameSet = 1;
+        s.setAngle(th);
+        pb.evaluate(pb.dn1, pb.dn2);
+        loading = pb.F1 > pb.dn1 || pb.F2 > pb.dn2;
+      }
+    }
+    if (!loading) {
+      pb.chi1 = 0;
+      pb.chi2 = 0;
+      this.finish(from, to, th, thDeg, frameSet);
+      return true;
+    }
+    // C.4.4: frozen-strain flags from the trial, frozen for the step
+    pb.Hf1 = s.sigD[0] > s.tolS ? 1 : 0;
+    pb.Hf2 = s.sigD[1] > s.tolS ? 1 : 0;
+    if (!pb.solveNewton() && !pb.solveFixedPoint()) {
+      this.rejection = "newton";
+      return false;
+    }
+    const dd1 = pb.d1 - pb.dn1;
+    const dd2 = pb.d2 - pb.dn2;
+    if (dd1 > DELTA_D_MAX || dd2 > DELTA_D_MAX) {
+      this.rejection = "delta d";
+      return false;
+    }
+    this.dPhi = this.dissipation(from);
+    if (!atMinimum) {
+      const tol = s.tolS;
+      const sd = s.sigD;
+      if (
+        (dd1 > 0 && (pb.Hf1 === 1 ? sd[0] < -tol : sd[0] > tol)) ||
+        (dd2 > 0 && (pb.Hf2 === 1 ? sd[1] < -tol : sd[1] > tol))
+      ) {
+        this.rejection = "frozen flag";
+        return false;
+      }
+      if (this.dPhi < -1e-12 * (1 + from[W])) {
+        this.rejection = "dissipation";
+        return false;
+      }
+    }
+    this.finish(from, to, th, thDeg, frameSet);
+    return true;
+  }
+
+  /**
+   * onFailure 'continue' (spec C.7): set the failed families (bit mask) to dmax in the step just
+   * accepted into `to`, dp following the step's frozen flag, re-solve at the same targets.
+   * Must follow the accepted `step(from, …, to)` call directly.
+   */
+  capAtDmax(from: Float64Array, to: Float64Array, mask: number): void {
+    const pb = this.problem;
+    const dmax = this.m.dmax;
+    pb.evaluate(mask & 1 ? dmax : to[D1], mask & 2 ? dmax : to[D2]);
+    this.dPhi = this.dissipation(from);
+    this.finish(from, to, to[TH], to[TH_DEG], to[FRAME_SET]);
+  }
+
+  /** Onset test of B.8 / C.4.2 on the trial stress in its principal frame (d = 0, s12 = 0). */
+  private onsetTriggered(): boolean {
+    const m = this.m;
+    const sig = this.problem.solver.sig;
+    const c = 0.5 * (sig[0] + sig[1]);
+    const R = Math.hypot(0.5 * (sig[0] - sig[1]), sig[2]);
+    const Y1 = releaseRate(c + R, 0, 0, m.E1, 0);
+    const Y2 = releaseRate(c - R, 0, 0, m.E2, 0);
+    return evolutionF(m, 1, Y1 + m.b * Y2) > 0 || evolutionF(m, 2, m.b * Y1 + Y2) > 0;
+  }
+
+  /**
+   * Discrete dissipation of the step (spec C.5):
+   * Σ ½(Y_i^n + Y_i)·Δd_i + Σ alpha_i·½(s_ii^n + s_ii)·Δdp_i, with the old stress taken in the
+   * step's damage frame (the frame only changes at onset, where d^n = 0).
+   */
+  private dissipation(from: Float64Array): number {
+    const m = this.m;
+    const pb = this.problem;
+    const tm = pb.solver.tm;
+    const sd = pb.solver.sigD;
+    const a = from[SIG];
+    const b = from[SIG + 1];
+    const c = from[SIG + 2];
+    const sn0 = tm[0] * a + tm[1] * b + tm[2] * c;
+    const sn1 = tm[3] * a + tm[4] * b + tm[5] * c;
+    const sn2 = tm[6] * a + tm[7] * b + tm[8] * c;
+    const Yn1 = releaseRate(sn0, sn2, m.k6, m.E1, pb.dn1);
+    const Yn2 = releaseRate(sn1, sn2, m.k6, m.E2, pb.dn2);
+    return (
+      0.5 * (Yn1 + pb.Y1) * (pb.d1 - pb.dn1) +
+      0.5 * (Yn2 + pb.Y2) * (pb.d2 - pb.dn2) +
+      m.alpha * 0.5 * (sn0 + sd[0]) * (pb.dp1 - pb.dpn1) +
+      m.beta * 0.5 * (sn1 + sd[1]) * (pb.dp2 - pb.dpn2)
+    );
+  }
+
+  /** Writes the evaluated point into `to` (work W and dissipation Phi are the driver's). */
+  private finish(from: Float64Array, to: Float64Array, th: number, thDeg: number, fs: number) {
+    const pb = this.problem;
+    const s = pb.solver;
+    if (pb.d1 === pb.dn1 && pb.d2 === pb.dn2) this.dPhi = 0;
+    to[D1] = pb.d1;
+    to[D2] = pb.d2;
+    to[DP1] = pb.dp1;
+    to[DP2] = pb.dp2;
+    to[TH] = th;
+    to[TH_DEG] = thDeg;
+    to[FRAME_SET] = fs;
+    let psi = 0;
+    for (let k = 0; k < 3; k++) {
+      to[SIG + k] = s.sig[k];
+      to[EPS + k] = s.eps[k];
+      to[SIG_D + k] = s.sigD[k];
+      to[EPS_P + k] = s.ePL[k];
+      psi += s.sig[k] * (s.eps[k] - s.ePL[k]);
+    }
+    to[PSI] = 0.5 * psi;
+    to[Y1] = pb.Y1;
+    to[Y2] = pb.Y2;
+    to[REGIME] = s.regime;
+    to[W] = from[W];
+    to[PHI] = from[PHI];
+  }
+}
