@@ -5,9 +5,6 @@ import { randomBytes, scrypt, timingSafeEqual, type ScryptOptions } from "node:c
 const PARAMS: ScryptOptions = { N: 1 << 15, r: 8, p: 1, maxmem: 64 * 1024 * 1024 };
 const KEY_LENGTH = 64;
 
-export const MIN_PASSWORD_LENGTH = 12;
-export const MAX_PASSWORD_LENGTH = 256;
-
 function derive(password: string, salt: Buffer): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     scrypt(password.normalize("NFKC"), salt, KEY_LENGTH, PARAMS, (error, key) =>

@@ -1,6 +1,6 @@
 import { z } from "zod";
 
-import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/auth/password";
+import { MAX_PASSWORD_LENGTH, MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
 
 // The same schemas validate the form in the browser and the action on the server.
 

@@ -48,3 +48,8 @@ export const deleteTeamSchema = z.object({
   // Typing the slug again guards against a slip of the mouse.
   confirm: z.string().trim(),
 });
+
+export const revokeInvitationSchema = z.object({
+  teamSlug: teamSlugSchema,
+  invitationId: z.uuid("Unknown invitation."),
+});

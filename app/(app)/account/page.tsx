@@ -1,0 +1,53 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+
+import { resendVerificationAction } from "@/app/(auth)/actions";
+import { TokenActionButton } from "@/components/auth/token-action-button";
+import { Card } from "@/components/ui/card";
+import { FormMessage } from "@/components/ui/form-message";
+import { getActor } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Account" };
+
+export default async function AccountPage() {
+  const actor = await getActor();
+  if (!actor) return null; // the layout has redirected already
+  return (
+    <div className="space-y-6">
+      <h1 className="font-display text-3xl font-semibold">Account</h1>
+      <Card title="You" id="you">
+        <dl className="grid grid-cols-[8rem_1fr] gap-y-2 text-sm">
+          <dt className="text-ink-faint">Name</dt>
+          <dd>{actor.name}</dd>
+          <dt className="text-ink-faint">E-mail</dt>
+          <dd>{actor.email}</dd>
+          <dt className="text-ink-faint">Address</dt>
+          <dd data-testid="verified-state">{actor.verified ? "Confirmed" : "Not confirmed yet"}</dd>
+        </dl>
+      </Card>
+      {actor.verified ? null : (
+        <Card title="Confirm your e-mail address" id="confirm">
+          <FormMessage tone="info">
+            Until your address is confirmed you can use the sandbox, but not create or join teams.
+          </FormMessage>
+          <div className="mt-4">
+            <TokenActionButton
+              label="Send a new confirmation link"
+              action={resendVerificationAction}
+              successMessage="Sent. The link works for 48 hours."
+            />
+          </div>
+        </Card>
+      )}
+      <Card title="Password" id="password">
+        <p className="text-sm text-ink-soft">
+          To change it,{" "}
+          <Link href="/reset" className="text-verdigris-dark hover:underline">
+            ask for a reset link
+          </Link>
+          ; using it signs out all your sessions.
+        </p>
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,56 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+
+import { getDb } from "@/db/index";
+import { getActor } from "@/lib/auth/session";
+import { mailDeps } from "@/lib/email/deps";
+import { runAction, type ActionResult } from "@/lib/errors";
+import { inviteMember } from "@/lib/teams/invitations";
+import { changeMemberRole, leaveTeam, removeMember } from "@/lib/teams/members";
+import { revokeInvitation } from "@/lib/teams/revoke-invitation";
+
+// Each service authorizes the actor for its own capability (lib/teams/access.ts), so a forged
+// team slug, user id or role in the payload is refused there, not trusted here.
+
+function slugOf(input: unknown): string {
+  const slug = (input as { teamSlug?: unknown } | null)?.teamSlug;
+  return typeof slug === "string" ? slug : "";
+}
+
+function refresh(input: unknown) {
+  revalidatePath(`/teams/${slugOf(input)}/members`);
+}
+
+export async function inviteAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => {
+    await inviteMember(getDb(), await getActor(), input, mailDeps());
+  });
+  if (result.ok) refresh(input);
+  return result;
+}
+
+export async function revokeInvitationAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => revokeInvitation(getDb(), await getActor(), input));
+  if (result.ok) refresh(input);
+  return result;
+}
+
+export async function changeRoleAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => changeMemberRole(getDb(), await getActor(), input));
+  if (result.ok) refresh(input);
+  return result;
+}
+
+export async function removeMemberAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => removeMember(getDb(), await getActor(), input));
+  if (result.ok) refresh(input);
+  return result;
+}
+
+export async function leaveTeamAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => leaveTeam(getDb(), await getActor(), input));
+  if (result.ok) redirect("/teams");
+  return result;
+}

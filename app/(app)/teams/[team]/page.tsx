@@ -1,0 +1,55 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+
+import { Card } from "@/components/ui/card";
+import { getDb } from "@/db/index";
+import { requireTeamRole } from "@/lib/auth/guard";
+import { ROLE_LABELS } from "@/lib/auth/permissions";
+import { listMembers } from "@/lib/teams/queries";
+
+import { TeamNav } from "./team-nav";
+
+export const metadata: Metadata = { title: "Team" };
+
+export default async function TeamHomePage({ params }: { params: Promise<{ team: string }> }) {
+  const { team: slug } = await params;
+  const ctx = await requireTeamRole(slug, "team:read");
+  const members = await listMembers(getDb(), ctx.team.id);
+  return (
+    <>
+      <TeamNav slug={ctx.team.slug} name={ctx.team.name} role={ctx.role} />
+      <div className="grid gap-6 md:grid-cols-2">
+        {/* Filled by later work; the headings fix where each kind of work lives. */}
+        <Card title="Scenarios" id="scenarios">
+          <p className="text-sm text-ink-soft">
+            No scenarios yet. Saved scenarios and their revisions will be listed here.
+          </p>
+        </Card>
+        <Card title="Parameter sets" id="parameter-sets">
+          <p className="text-sm text-ink-soft">No parameter sets yet.</p>
+        </Card>
+        <Card title="Test records" id="test-records">
+          <p className="text-sm text-ink-soft">
+            No test records yet. Uploaded coupon curves will appear here.
+          </p>
+        </Card>
+        <Card title="Members" id="members">
+          <ul className="space-y-1 text-sm">
+            {members.map((m) => (
+              <li key={m.userId} className="flex justify-between">
+                <span>{m.name}</span>
+                <span className="text-ink-soft">{ROLE_LABELS[m.role]}</span>
+              </li>
+            ))}
+          </ul>
+          <Link
+            href={`/teams/${ctx.team.slug}/members`}
+            className="mt-3 inline-block text-sm text-verdigris-dark hover:underline"
+          >
+            All members
+          </Link>
+        </Card>
+      </div>
+    </>
+  );
+}

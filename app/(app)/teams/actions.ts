@@ -1,0 +1,16 @@
+"use server";
+
+import { redirect } from "next/navigation";
+
+import { getDb } from "@/db/index";
+import { getActor } from "@/lib/auth/session";
+import { runAction, type ActionResult } from "@/lib/errors";
+import { createTeam } from "@/lib/teams/create";
+
+export async function createTeamAction(input: unknown): Promise<ActionResult<string>> {
+  const result = await runAction(
+    async () => (await createTeam(getDb(), await getActor(), input)).slug,
+  );
+  if (result.ok) redirect(`/teams/${result.data}`);
+  return result;
+}

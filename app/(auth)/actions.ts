@@ -1,0 +1,73 @@
+"use server";
+
+import { redirect } from "next/navigation";
+
+import { getDb } from "@/db/index";
+import { requestPasswordReset, resetPassword } from "@/lib/accounts/password-reset";
+import { authenticate } from "@/lib/accounts/sign-in";
+import { signUp } from "@/lib/accounts/sign-up";
+import { resendVerification, verifyEmail } from "@/lib/accounts/verify-email";
+import { getClientAddress } from "@/lib/auth/client-address";
+import { endSession, getActor, startSession } from "@/lib/auth/session";
+import { mailDeps } from "@/lib/email/deps";
+import { AppError, runAction, type ActionResult } from "@/lib/errors";
+import { safeNextPath } from "@/lib/safe-next";
+
+// Thin wrappers: session, request address and mailer come from the request; the rules live in
+// lib/accounts and are tested there. Every input is re-validated by the service's zod schema.
+
+export async function signUpAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => {
+    await signUp(getDb(), input, mailDeps());
+  });
+  if (result.ok) redirect("/sign-in?notice=check-mail");
+  return result;
+}
+
+export async function signInAction(input: unknown, next?: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => {
+    const user = await authenticate(getDb(), input, await getClientAddress());
+    await startSession(user.id);
+  });
+  if (result.ok) redirect(safeNextPath(next));
+  return result;
+}
+
+export async function signOutAction(): Promise<void> {
+  await endSession();
+  redirect("/sign-in?notice=signed-out");
+}
+
+export async function verifyEmailAction(token: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => {
+    await verifyEmail(getDb(), token);
+  });
+  if (result.ok) redirect((await getActor()) ? "/teams" : "/sign-in?notice=verified");
+  return result;
+}
+
+export async function resendVerificationAction(): Promise<ActionResult> {
+  return runAction(async () => {
+    const actor = await getActor();
+    if (!actor) throw new AppError("unauthenticated", "Please sign in first.");
+    await resendVerification(getDb(), actor, mailDeps());
+  });
+}
+
+export async function requestResetAction(input: unknown): Promise<ActionResult> {
+  return runAction(async () => {
+    await requestPasswordReset(getDb(), input, await getClientAddress(), mailDeps());
+  });
+}
+
+export async function resetPasswordAction(input: unknown): Promise<ActionResult> {
+  const result = await runAction(async () => {
+    await resetPassword(getDb(), input);
+  });
+  if (result.ok) {
+    // Every session of the user was ended, including this browser's.
+    await endSession();
+    redirect("/sign-in?notice=password-changed");
+  }
+  return result;
+}

@@ -1,0 +1,16 @@
+"use server";
+
+import { redirect } from "next/navigation";
+
+import { getDb } from "@/db/index";
+import { getActor } from "@/lib/auth/session";
+import { runAction, type ActionResult } from "@/lib/errors";
+import { acceptInvitation } from "@/lib/teams/accept-invitation";
+
+export async function acceptInvitationAction(token: unknown): Promise<ActionResult<string>> {
+  const result = await runAction(
+    async () => (await acceptInvitation(getDb(), await getActor(), token)).slug,
+  );
+  if (result.ok) redirect(`/teams/${result.data}`);
+  return result;
+}

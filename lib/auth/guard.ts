@@ -1,0 +1,30 @@
+import "server-only";
+
+import { notFound, redirect } from "next/navigation";
+
+import { getDb } from "@/db/index";
+import { isAppError } from "@/lib/errors";
+import { authorizeTeam, type TeamContext } from "@/lib/teams/access";
+
+import type { Capability } from "./permissions";
+import { getActor } from "./session";
+
+/**
+ * The guard for team pages and route handlers: the signed-in actor must hold `capability` in
+ * the team. Anonymous → sign-in; unknown team, foreign team or missing capability → 404 (a page
+ * never confirms that a team exists to someone outside it). Actions call the team services,
+ * which run the same authorizeTeam check inside.
+ */
+export async function requireTeamRole(
+  teamSlug: string,
+  capability: Capability,
+): Promise<TeamContext> {
+  const actor = await getActor();
+  if (!actor) redirect(`/sign-in?next=${encodeURIComponent(`/teams/${teamSlug}`)}`);
+  try {
+    return await authorizeTeam(getDb(), actor, teamSlug, capability);
+  } catch (error) {
+    if (isAppError(error)) notFound();
+    throw error;
+  }
+}
