@@ -29,7 +29,7 @@ export function isAppError(error: unknown): error is AppError {
 }
 
 /** What a server action hands back to a form: never a stack, never a raw driver message. */
-export type ActionResult<T = undefined> =
+export type ActionResult<T = void> =
   { ok: true; data: T } | { ok: false; code: string; message: string; field?: string };
 
 export const MASKED_MESSAGE = "Something went wrong on our side. Please try again in a moment.";
