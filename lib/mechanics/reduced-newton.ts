@@ -44,6 +44,8 @@ export class ReducedProblem {
   r1 = 0;
   r2 = 0;
   iterations = 0;
+  /** reduced Jacobian J (row-major 2×2) of the last direction() call */
+  readonly jac = new Float64Array(4);
   // Newton direction
   private dd1 = 0;
   private dd2 = 0;
@@ -143,7 +145,7 @@ export class ReducedProblem {
    * Newton direction Δd = −J⁻¹r with the consistent Jacobian of spec C.5 at the evaluated point.
    * J = I − diag(chi·F')·Bb·(gS·Tm·dsigL_dd + gD). Returns false if J is singular.
    */
-  private direction(): boolean {
+  direction(): boolean {
     const m = this.m;
     const s = this.solver;
     const sd = s.sigD;
@@ -175,6 +177,11 @@ export class ReducedProblem {
     const j12 = -k1 * (dY1d2 + m.b * dY2d2);
     const j21 = -k2 * (m.b * dY1d1 + dY2d1);
     const j22 = 1 - k2 * (m.b * dY1d2 + dY2d2);
+    const jac = this.jac;
+    jac[0] = j11;
+    jac[1] = j12;
+    jac[2] = j21;
+    jac[3] = j22;
     const det = j11 * j22 - j12 * j21;
     if (!(Math.abs(det) > 1e-300) || !Number.isFinite(det)) return false;
     this.dd1 = -(j22 * this.r1 - j12 * this.r2) / det;
