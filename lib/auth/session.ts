@@ -7,7 +7,7 @@ import { getDb } from "@/db/index";
 import type { Actor } from "@/lib/accounts/actor";
 import { isHttpsApp } from "@/lib/env";
 
-import { actorFromUser, createLucia, type AppLucia } from "./lucia";
+import { actorFromUser, createLucia, SESSION_COOKIE, type AppLucia } from "./lucia";
 
 let instance: AppLucia | undefined;
 
@@ -18,10 +18,11 @@ export function getLucia(): AppLucia {
 
 /** Once per request: reads the session cookie and validates (and slides) the session. */
 export const getCurrentSession = cache(async () => {
-  const lucia = getLucia();
+  // cookies() first: it marks the render dynamic, so `next build` never reaches the database.
   const store = await cookies();
-  const sessionId = store.get(lucia.sessionCookieName)?.value ?? null;
+  const sessionId = store.get(SESSION_COOKIE)?.value ?? null;
   if (!sessionId) return { user: null, session: null };
+  const lucia = getLucia();
   const result = await lucia.validateSession(sessionId);
   // Server Components may not set cookies; actions and route handlers may. Refreshing is a
   // nicety, so a refusal here is ignored and the next action will refresh instead.
