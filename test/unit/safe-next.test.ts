@@ -1,0 +1,23 @@
+import { describe, expect, it } from "vitest";
+
+import { safeNextPath } from "@/lib/safe-next";
+
+describe("redirect target after sign-in", () => {
+  it("keeps same-site paths", () => {
+    expect(safeNextPath("/teams/demo/members")).toBe("/teams/demo/members");
+    expect(safeNextPath("/invite/abc?x=1")).toBe("/invite/abc?x=1");
+  });
+
+  it("falls back for anything that could leave the site", () => {
+    for (const value of [
+      "https://elsewhere.example",
+      "//elsewhere.example",
+      "/\\elsewhere.example",
+      "teams",
+      undefined,
+      3,
+    ]) {
+      expect(safeNextPath(value)).toBe("/teams");
+    }
+  });
+});
