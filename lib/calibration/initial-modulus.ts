@@ -1,8 +1,8 @@
 /**
  * Spec E.3: the undamaged modulus E0. Preferred: the median unloading modulus of the leading
- * loops that agree within 2 % (peaks below the knee). Those loops are only sub-knee if they agree
- * with the first loading ramp too; when loop 1 is already damaged its modulus sits clearly below
- * the ramp's and the ramp fit (0.05–0.35·σmax_1) is used instead.
+ * loops that agree within 2 % and whose peaks are below the knee (loading to them was elastic).
+ * When loop 1 is already damaged its modulus sits clearly below the first ramp's, and the ramp
+ * fit (0.05–0.35·σmax_1) is used instead.
  */
 import { leastSquaresLine } from "./line-fit";
 import type { LoopModulus } from "./loop-moduli";
@@ -38,9 +38,19 @@ export function initialModulus(
     return ramp ? { E0: ramp.slope, source: "first ramp", loopsUsed: 0, rampE: ramp.slope } : null;
   }
   const ramp = firstRamp(strain, stress, loops[0].peakIndex, loops[0].sigMax);
-  const group = [loops[0].E];
-  for (let k = 1; k < loops.length && Math.abs(loops[k].E - loops[0].E) <= 0.02 * loops[0].E; k++) {
-    group.push(loops[k].E);
+  // A loop's peak is below the knee when loading to it was elastic: the secant from the loop's
+  // start (origin or previous valley) to its peak equals its unloading modulus (within 1 %).
+  const group: number[] = [];
+  for (let k = 0; k < loops.length; k++) {
+    const loop = loops[k];
+    if (k > 0 && Math.abs(loop.E - loops[0].E) > 0.02 * loops[0].E) break;
+    const start = k === 0 ? 0 : loops[k - 1].valleyIndex;
+    const secant = (loop.sigMax - stress[start]) / (loop.epsMax - strain[start]);
+    if (Math.abs(secant / loop.E - 1) > Math.max(0.01, (3 * loop.seE) / loop.E)) break;
+    group.push(loop.E);
+  }
+  if (group.length === 0) {
+    return ramp ? { E0: ramp.slope, source: "first ramp", loopsUsed: 0, rampE: ramp.slope } : null;
   }
   const fromLoops = median(group);
   if (ramp) {

@@ -16,6 +16,8 @@ export interface TestRecordInput {
   points: RecordPoints;
   /** Loop detection works on strain unless the test was load-controlled (spec E.2). */
   control?: "strain" | "stress";
+  /** Degrees from damage axis 1 to the load axis (off-axis tension, spec E.8 c). */
+  orientation?: number;
   /** transverse-after-damage-1 only: the energy release rate Y1max of the axial pre-damage, MPa. */
   preDamageY1?: number;
 }

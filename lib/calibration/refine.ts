@@ -1,0 +1,190 @@
+/**
+ * Refinement (issue 6): least squares over all chosen records, each measured strain history
+ * replayed through the driver, by Levenberg–Marquardt (ml-levenberg-marquardt) with bounds and
+ * fixed/free parameters. Pure and deterministic; `onProgress` and `shouldCancel` let a worker host
+ * it. Residuals are divided by each record's peak |stress| so records of different size weigh
+ * alike.
+ */
+import { levenbergMarquardt } from "ml-levenberg-marquardt";
+import type { MaterialParams } from "@/lib/mechanics/types";
+import { cleanRecord } from "./clean";
+import { decimationIndices } from "./decimate";
+import { inseparableParams, type Inseparable } from "./identifiability";
+import { paramVector, type Bounds, type FittableParam } from "./refine-params";
+import { canReplay, replayRecord } from "./replay";
+import type { RecordPoints, TestRecordInput } from "./types";
+
+export interface RefineProgress {
+  round: number;
+  evaluations: number;
+  rms: number; // scaled (relative to each record's peak stress), over the fitted samples
+}
+
+export interface RefineOptions {
+  free: FittableParam[];
+  bounds?: Bounds;
+  onProgress?: (p: RefineProgress) => void;
+  shouldCancel?: () => boolean;
+  maxRounds?: number; // rounds of 3 Levenberg–Marquardt iterations
+  maxPointsPerRecord?: number; // samples replayed inside the loop
+}
+
+export interface RecordResidual {
+  id: string;
+  rms: number; // MPa, full record
+  points: number;
+}
+
+export interface RefineResult {
+  params: MaterialParams;
+  residuals: RecordResidual[];
+  skipped: string[]; // records whose test type cannot be replayed
+  inseparable: Inseparable[];
+  rounds: number;
+  evaluations: number;
+  cancelled: boolean;
+}
+
+class Cancelled extends Error {}
+
+interface Prepared {
+  record: TestRecordInput;
+  points: RecordPoints; // decimated
+  offset: number; // first index in the stacked residual vector
+  scale: number; // MPa
+}
+
+function prepare(records: TestRecordInput[], maxPoints: number): { sets: Prepared[]; y: number[] } {
+  const sets: Prepared[] = [];
+  const y: number[] = [];
+  for (const record of records) {
+    const clean = cleanRecord(record.points);
+    const keep = decimationIndices(clean.strain, maxPoints);
+    const pick = (a: Float64Array) => Float64Array.from(keep, (i) => a[i]);
+    const points: RecordPoints = {
+      strain: pick(clean.strain),
+      stress: pick(clean.stress),
+      transverseStrain: clean.transverseStrain && pick(clean.transverseStrain),
+    };
+    const scale = Math.max(1e-9, ...Array.from(points.stress, Math.abs));
+    sets.push({ record, points, offset: y.length, scale });
+    for (const s of points.stress) y.push(s / scale);
+  }
+  return { sets, y };
+}
+
+export function refine(
+  records: TestRecordInput[],
+  start: MaterialParams,
+  options: RefineOptions,
+): RefineResult {
+  const usable = records.filter((r) => canReplay(r.testType));
+  const skipped = records.filter((r) => !canReplay(r.testType)).map((r) => r.id);
+  const { sets, y } = prepare(usable, options.maxPointsPerRecord ?? 500);
+  const vector = paramVector(start, options.free, options.bounds);
+  let evaluations = 0;
+
+  // One replay of every record per parameter vector; the library then asks point by point.
+  const model = (u: ArrayLike<number>): Float64Array => {
+    if (options.shouldCancel?.()) throw new Cancelled();
+    evaluations++;
+    const out = new Float64Array(y.length);
+    let params: MaterialParams;
+    try {
+      params = vector.toParams(u);
+      for (const set of sets) {
+        const { predicted } = replayRecord(params, set.record.testType, set.points);
+        for (let i = 0; i < predicted.length; i++) out[set.offset + i] = predicted[i] / set.scale;
+      }
+    } catch (error) {
+      if (error instanceof Cancelled) throw error;
+      // Inadmissible trial (e.g. a·sqrt(Y0) ≥ 1): a zero prediction is a large residual, so the
+      // damping grows and the step is refused.
+      out.fill(0);
+    }
+    return out;
+  };
+  const data = { x: Float64Array.from(y, (_, i) => i), y };
+  const rmsOf = (u: ArrayLike<number>) => {
+    const m = model(u);
+    let s = 0;
+    for (let i = 0; i < y.length; i++) s += (m[i] - y[i]) ** 2;
+    return Math.sqrt(s / y.length);
+  };
+
+  let u = vector.start.slice();
+  let rms = rmsOf(u);
+  let rounds = 0;
+  let cancelled = false;
+  try {
+    for (rounds = 1; rounds <= (options.maxRounds ?? 12); rounds++) {
+      const fit = levenbergMarquardt(
+        data,
+        (p) => {
+          const m = model(p);
+          return (x) => m[x];
+        },
+        {
+          initialValues: u,
+          minValues: vector.min,
+          maxValues: vector.max,
+          gradientDifference: 1e-5,
+          maxIterations: 3,
+          errorTolerance: 1e-14 * y.length,
+          improvementThreshold: 1e-3,
+        },
+      );
+      const next = fit.parameterValues;
+      const nextRms = rmsOf(next);
+      const improved = nextRms < rms;
+      if (improved) u = next;
+      options.onProgress?.({ round: rounds, evaluations, rms: Math.min(rms, nextRms) });
+      const gain = (rms - nextRms) / Math.max(rms, 1e-300);
+      if (improved) rms = nextRms;
+      if (!improved || gain < 1e-6) break;
+    }
+  } catch (error) {
+    if (!(error instanceof Cancelled)) throw error;
+    cancelled = true;
+  }
+  const params = vector.toParams(u);
+  return {
+    params,
+    residuals: usable.map((record) => fullResidual(params, record)),
+    skipped,
+    inseparable: cancelled ? [] : inseparableParams(jacobian(model, u, y.length), vector.names),
+    rounds,
+    evaluations,
+    cancelled,
+  };
+}
+
+/** Forward-difference Jacobian of the scaled model at u (rows: samples). */
+function jacobian(
+  model: (u: ArrayLike<number>) => Float64Array,
+  u: number[],
+  rows: number,
+): number[][] {
+  const base = model(u);
+  const h = 1e-5;
+  const J: number[][] = Array.from({ length: rows }, () => new Array(u.length).fill(0));
+  u.forEach((_, j) => {
+    const moved = u.slice();
+    moved[j] += h;
+    const m = model(moved);
+    for (let i = 0; i < rows; i++) J[i][j] = (m[i] - base[i]) / h;
+  });
+  return J;
+}
+
+function fullResidual(params: MaterialParams, record: TestRecordInput): RecordResidual {
+  const clean = cleanRecord(record.points);
+  const { predicted } = replayRecord(params, record.testType, clean);
+  let s = 0;
+  for (let i = 0; i < predicted.length; i++) s += (predicted[i] - clean.stress[i]) ** 2;
+  return {
+    id: record.id,
+    rms: Math.sqrt(s / Math.max(1, predicted.length)),
+    points: predicted.length,
+  };
+}
