@@ -28,7 +28,10 @@ const fieldsSchema = z.strictObject(
       .min(1, { error: "must not be empty" })
       .max(64, { error: "must be at most 64 characters" })
       .optional(),
-    label: z.string({ error: "must be a string" }).max(200).default(""),
+    label: z
+      .string({ error: "must be a string" })
+      .max(200, { error: "must be at most 200 characters" })
+      .default(""),
     E1: positive("E1"),
     E2: positive("E2"),
     nu12: finiteNumber(),

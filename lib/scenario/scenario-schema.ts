@@ -53,7 +53,10 @@ const parameterSetsSchema = z
 export const scenarioFileSchema = z.object(
   {
     format: formatSchema,
-    name: z.string({ error: "must be a string" }).max(500).default(""),
+    name: z
+      .string({ error: "must be a string" })
+      .max(500, { error: "must be at most 500 characters" })
+      .default(""),
     parameterSets: parameterSetsSchema,
     path: pathSchema,
   },

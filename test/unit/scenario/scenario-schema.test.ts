@@ -98,6 +98,16 @@ describe("scenario file", () => {
     expect(errors).toEqual(["parameterSets[1].a1: must be > 0 and a1·sqrt(Y0_1) < 1"]);
   });
 
+  it("limits label and name lengths with a message that says so", () => {
+    const long = "x".repeat(501);
+    expect(
+      errorsOf(demoFile({ name: long, parameterSets: [{ ...DEMO_REQUIRED, label: long }] })),
+    ).toEqual([
+      "name: must be at most 500 characters",
+      "parameterSets[0].label: must be at most 200 characters",
+    ]);
+  });
+
   it("ignores unknown top-level fields (room for editor metadata)", () => {
     expect(errorsOf(demoFile({ chart: { x: "eps11" } }))).toEqual([]);
   });
