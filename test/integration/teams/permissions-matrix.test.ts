@@ -4,12 +4,12 @@ import { describe, expect, it } from "vitest";
 import { invitations } from "@/db/schema/invitations";
 import { teams } from "@/db/schema/teams";
 import type { Actor } from "@/lib/accounts/actor";
-import { isAppError } from "@/lib/errors";
 import { inviteMember } from "@/lib/teams/invitations";
 import { changeMemberRole, removeMember } from "@/lib/teams/members";
 import { deleteTeam, renameTeam } from "@/lib/teams/settings";
 
-import { recordingMailer, openTestDb } from "../support/db";
+import { openTestDb, recordingMailer } from "../support/db";
+import { outcome } from "../support/outcome";
 import { makeTeamWithAllRoles, roleOf, type TeamFixture } from "../support/team";
 
 const db = openTestDb();
@@ -76,16 +76,6 @@ const ACTIONS: Record<string, TeamAction> = {
       (await db.select().from(teams).where(eq(teams.id, t.teamId))).length === 0,
   },
 };
-
-async function outcome(promise: Promise<unknown>): Promise<string | null> {
-  try {
-    await promise;
-    return null;
-  } catch (error) {
-    if (isAppError(error)) return error.code;
-    throw error;
-  }
-}
 
 describe("each actor against each team action", () => {
   for (const [name, action] of Object.entries(ACTIONS)) {
