@@ -39,6 +39,21 @@ describe("limit load under stress control (spec C.7)", () => {
   });
 });
 
+describe("no convergence under full strain control (spec C.7)", () => {
+  it("a strain jump too large even at hmin = 2^-12: 'no convergence', last converged sub-step", () => {
+    const r = run({}, [leg([E, E, E], [0.001, 0, 0], 2), leg([E, E, E], [10, 0, 0], 1)]);
+    const n = last(r);
+    expect(n).toBe(3);
+    expect(r.status).toMatchObject({ failed: true, failMode: "no convergence", stoppedAtStep: 3 });
+    expect(r.columns.failed[n]).toBe(1);
+    expect(r.columns.failed[n - 1]).toBe(0);
+    // the row is a converged sub-step on the 2^-12 grid of the increment, short of the target
+    const f = ((r.columns.eps11[n] - 0.001) / (10 - 0.001)) * 4096;
+    expect(Math.abs(f - Math.round(f))).toBeLessThan(1e-6);
+    expect(r.columns.eps11[n]).toBeLessThan(10);
+  });
+});
+
 describe("dcrit and onFailure (spec B.6, C.7)", () => {
   it("'stop': the path ends with the row where d reaches dcrit, failed = 1", () => {
     const r = run({}, [leg([E, S, S], [0.02, 0, 0], 200), leg([E, S, S], [0, 0, 0], 10)]);
@@ -48,6 +63,12 @@ describe("dcrit and onFailure (spec B.6, C.7)", () => {
     expect(r.columns.d1[n]).toBeGreaterThanOrEqual(DEMO.dcrit);
     expect(r.columns.d1[n]).toBeLessThan(DEMO.dmax);
     expect(n).toBeLessThan(200);
+  });
+
+  it("loading along axis 2 fails as 'dcrit axis 2'", () => {
+    const r = run({}, [leg([S, E, S], [0, 0.02, 0], 200)]);
+    expect(r.status.failMode).toBe("dcrit axis 2");
+    expect(r.columns.d2[last(r)]).toBeGreaterThanOrEqual(DEMO.dcrit);
   });
 
   it("'continue': the failing row already shows dmax, failed stays 1, the path goes on", () => {
