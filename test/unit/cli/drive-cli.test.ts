@@ -91,6 +91,30 @@ describe("drive (spawned)", () => {
     expect(columns.eps11[last - 1]).toBeLessThan(0.01537811);
   });
 
+  it('goes on past dcrit with onFailure "continue": every row written, failed stays 1', () => {
+    const pull = demoFile({
+      parameterSets: [{ ...DEMO_REQUIRED, onFailure: "continue" }],
+      path: {
+        legs: [
+          { control: ["strain", "stress", "stress"], target: [0.02, 0, 0], increments: 200 },
+          { control: ["strain", "stress", "stress"], target: [-0.005, 0, 0], increments: 50 },
+        ],
+      },
+    });
+    const { code, stdout } = drive(fileWith("continue.json", pull), "--format", "json");
+    expect(code).toBe(0);
+    const { columns, status } = JSON.parse(stdout);
+    expect(columns.step).toHaveLength(251);
+    expect(status).toMatchObject({ failed: true, failMode: "dcrit axis 1", stoppedAtStep: null });
+    const first = columns.failed.indexOf(1);
+    expect(first).toBeGreaterThan(0);
+    expect(columns.failed.slice(first).every((f: number) => f === 1)).toBe(true);
+    // scenario-file.md: the row where d reaches dcrit already shows it at dmax (spec C.7).
+    expect(columns.d1[first]).toBe(0.99);
+    // Compression after failure is carried with the undamaged modulus (unilateral recovery).
+    expect(columns.sig11[250]).toBeLessThan(0);
+  });
+
   it.each([
     [
       "an invalid parameter",
