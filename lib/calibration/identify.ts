@@ -102,23 +102,6 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
     notes.push("in-plane isotropic: axis 2 copies axis 1, G12 = E1/(2(1 + nu12)), beta = alpha");
   }
 
-  // In-plane shear (E.9): G12 from the first ramp or sub-knee loops, then k6.
-  for (const record of byType("shear-12")) {
-    const clean = cleanRecord(record.points);
-    const { loops } = measureLoops(
-      clean.strain,
-      clean.stress,
-      findTurningPoints(clean.strain, clean.noiseStrain),
-    );
-    const G0 = initialModulus(clean.strain, clean.stress, loops);
-    if (G0 && !isotropic) set("G12", G0.E0);
-    if (loops.length >= 2 && p.frame === "fixed") {
-      set("k6", isotropic ? shearWeightClosedForm(loops, p) : shearWeightByReplay(clean, p));
-    }
-    reports.set(record.id, { axis: null, extra: [] });
-    break;
-  }
-
   // Coupling b (E.8 a, b, c).
   const transverse = byType("transverse-after-damage-1").flatMap((record) => {
     reports.set(record.id, { axis: null, extra: [] });
@@ -148,6 +131,23 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
   const offAxis = records.filter((r) => r.testType === "tension-1" && r.orientation);
   if (offAxis.length && !identified.has("b") && p.frame === "fixed" && !isotropic) {
     set("b", couplingFromOffAxis(cleanRecord(offAxis[0].points), offAxis[0].orientation ?? 0, p));
+  }
+
+  // In-plane shear (E.9) after b, which D.11 needs: G12 from the first ramp or sub-knee loops, then k6.
+  for (const record of byType("shear-12")) {
+    const clean = cleanRecord(record.points);
+    const { loops } = measureLoops(
+      clean.strain,
+      clean.stress,
+      findTurningPoints(clean.strain, clean.noiseStrain),
+    );
+    const G0 = initialModulus(clean.strain, clean.stress, loops);
+    if (G0 && !isotropic) set("G12", G0.E0);
+    if (loops.length >= 2 && p.frame === "fixed") {
+      set("k6", isotropic ? shearWeightClosedForm(loops, p) : shearWeightByReplay(clean, p));
+    }
+    reports.set(record.id, { axis: null, extra: [] });
+    break;
   }
 
   // Unilateral check (E.11) on every record with tensile loops.
