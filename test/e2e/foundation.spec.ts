@@ -2,7 +2,7 @@ import { randomBytes } from "node:crypto";
 
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
-import { launchBrowser, newContext, type Browser, type Page } from "./support/browser";
+import { baseUrl, launchBrowser, newContext, type Browser, type Page } from "./support/browser";
 import { readMail, type OutboxMessage } from "./support/mail";
 import { screenshot } from "./support/screenshot";
 
@@ -56,6 +56,12 @@ describe("foundation: accounts, a team, an invitation", () => {
     await signIn(adaPage, ada);
     await adaPage.waitForURL(/\/teams$/);
     await expect(adaPage.getByTestId("signed-in-as").textContent()).resolves.toBe(ada.email);
+    const cookie = (await adaContext.cookies()).find((c) => c.name === "craq_session");
+    expect(cookie).toMatchObject({
+      httpOnly: true,
+      sameSite: "Lax",
+      secure: baseUrl().startsWith("https:"),
+    });
 
     await adaPage.getByLabel("Team name").fill(teamName);
     await adaPage.getByRole("button", { name: "Create team" }).click();
@@ -92,5 +98,15 @@ describe("foundation: accounts, a team, an invitation", () => {
 
     await benContext.close();
     await adaContext.close();
+  });
+
+  it("refuses a state-changing request from another origin before it reaches the app", async () => {
+    const response = await fetch(`${baseUrl()}/sign-in`, {
+      method: "POST",
+      headers: { origin: "https://elsewhere.example", "content-type": "text/plain" },
+      body: "x",
+    });
+    expect(response.status).toBe(403);
+    expect(await response.text()).toBe("Cross-origin request refused.");
   });
 });
