@@ -3,9 +3,11 @@ import "server-only";
 import { headers } from "next/headers";
 
 /**
- * The address used for per-address rate limits. Behind a reverse proxy the first
- * x-forwarded-for entry is the client; a direct connection has no such header, and then all
- * header-less clients share one bucket (stricter, never looser).
+ * The address used for per-address rate limits. `next start` fills x-forwarded-for from the
+ * socket when the request has none, and a reverse proxy puts the client first. A client talking
+ * to `next start` directly can send its own header and so pick its bucket: the per-account limit
+ * still holds, and a deployment should sit behind a proxy that overwrites the header.
+ * With no header at all every such client shares one bucket (stricter, never looser).
  */
 export async function getClientAddress(): Promise<string> {
   const h = await headers();
