@@ -153,9 +153,12 @@ export class PathRun {
       this.inc = 0;
     }
     const last = this.leg >= this.counts.length;
-    if (!ok || (this.status.failed && !this.m.continueOnFailure) || last) {
+    // A failure that ends the path names its row, even on the path's very last increment:
+    // readers test `stoppedAtStep !== null` to know the path did not run as scripted.
+    const stopped = !ok || (this.status.failed && !this.m.continueOnFailure);
+    if (stopped || last) {
       this.done = true;
-      if (!last || !ok) this.status.stoppedAtStep = row;
+      if (stopped) this.status.stoppedAtStep = row;
     }
   }
 
