@@ -1,0 +1,114 @@
+"use client";
+
+import { useMemo, useRef } from "react";
+import type { ChartDef } from "@/lib/workbench/chart-defs";
+import { buildChart, type TraceSource } from "@/lib/workbench/chart-traces";
+import { chartImageName } from "@/lib/workbench/file-names";
+import { emitEvent } from "@/lib/workbench/instrumentation";
+import type { ResultsStore } from "@/lib/workbench/results-store";
+import type { SetEntry } from "@/lib/workbench/set-list";
+import { Plot, saveChartImage } from "./plot";
+import { chartLayout, CHART_CONFIG } from "./chart-layout";
+import { useDrawVersion } from "./use-draw-version";
+
+export interface ResultChartProps {
+  def: ChartDef;
+  store: ResultsStore;
+  entries: SetEntry[];
+  cursor: number | null;
+  onCursor: (step: number) => void;
+  scenarioName: string;
+  /** Extra controls in the chart's heading (e.g. the component pickers). */
+  controls?: React.ReactNode;
+}
+
+export function ResultChart({
+  def,
+  store,
+  entries,
+  cursor,
+  onCursor,
+  scenarioName,
+  controls,
+}: ResultChartProps) {
+  const version = useDrawVersion(store);
+  const graph = useRef<HTMLElement | null>(null);
+  const built = useMemo(() => {
+    const sources: TraceSource[] = [];
+    for (const e of entries) {
+      const buf = store.get(e.set.id)?.buffer;
+      if (!e.visible || !buf) continue;
+      sources.push({
+        id: e.set.id,
+        label: e.set.label,
+        color: e.color,
+        columns: buf.columns,
+        rows: buf.rows,
+      });
+    }
+    return {
+      ...buildChart(def, sources, cursor),
+      version,
+      gen: store.generation,
+      complete: store.settled,
+    };
+    // version stands for the buffers' contents, which change in place
+  }, [def, entries, cursor, version, store]);
+  const layout = useMemo(() => chartLayout(def), [def]);
+
+  const drawn = (_fig: unknown, gd: HTMLElement) => {
+    graph.current = gd;
+    emitEvent("chart-drawn", {
+      chart: def.key,
+      gen: built.gen,
+      complete: built.complete,
+      version: built.version,
+    });
+  };
+
+  const save = (format: "png" | "svg") => {
+    if (graph.current)
+      void saveChartImage(graph.current, format, chartImageName(scenarioName, def.title));
+  };
+
+  return (
+    <figure
+      className="flex min-w-0 flex-col rounded-lg border border-glaze-line bg-white p-3"
+      data-chart={def.key}
+    >
+      <figcaption className="flex flex-wrap items-center gap-2">
+        <h3 className="font-display text-sm font-semibold">{def.title}</h3>
+        {controls}
+        <span className="ml-auto flex gap-1">
+          {(["png", "svg"] as const).map((f) => (
+            <button
+              key={f}
+              type="button"
+              onClick={() => save(f)}
+              className="rounded border border-glaze-line px-2 py-0.5 text-xs text-ink-soft hover:bg-glaze-deep"
+              aria-label={`Save ${def.title} as ${f.toUpperCase()}`}
+            >
+              {f.toUpperCase()}
+            </button>
+          ))}
+        </span>
+      </figcaption>
+      <div className="h-64 w-full">
+        <Plot
+          data={built.traces}
+          layout={layout}
+          config={CHART_CONFIG}
+          useResizeHandler
+          style={{ width: "100%", height: "100%" }}
+          onInitialized={drawn}
+          onUpdate={drawn}
+          onClick={(e: { points?: { curveNumber: number; pointIndex: number }[] }) => {
+            const p = e.points?.[0];
+            const rows = p ? built.rowsOf[p.curveNumber] : undefined;
+            if (p && rows) onCursor(rows[p.pointIndex]);
+          }}
+        />
+      </div>
+    </figure>
+  );
+}

@@ -1,0 +1,38 @@
+"use client";
+
+import { useState } from "react";
+import { defaultWorkbenchState } from "@/lib/workbench/default-scenario";
+import type { WorkbenchState } from "@/lib/workbench/scenario-state";
+import { decodeState, readHash } from "@/lib/workbench/url-state";
+import { Workbench } from "./workbench";
+
+function boot(): { state: WorkbenchState; error: string[] | null } {
+  const encoded = readHash(window.location.hash);
+  if (!encoded) return { state: defaultWorkbenchState(), error: null };
+  const decoded = decodeState(encoded);
+  if (decoded.ok) return { state: decoded.state, error: null };
+  return { state: defaultWorkbenchState(), error: decoded.errors };
+}
+
+/** Opens the scenario of the link if there is one, else the default; says why a link failed. */
+export function SandboxBoot() {
+  const [{ state, error }] = useState(boot);
+  return (
+    <>
+      {error && (
+        <div
+          role="alert"
+          className="mx-auto mt-4 max-w-[1600px] rounded-md border border-kiln/40 bg-kiln-light px-4 py-2 text-sm text-kiln-dark"
+        >
+          The scenario in this link could not be opened, so the sandbox shows its default instead:
+          <ul className="list-disc pl-5 font-mono text-xs">
+            {error.slice(0, 8).map((e) => (
+              <li key={e}>{e}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <Workbench initialScenario={state} syncUrl />
+    </>
+  );
+}
