@@ -88,6 +88,14 @@ export function admissibleParams(options: ParamsOptions = {}): fc.Arbitrary<Mate
   });
 }
 
+/** In-plane isotropic sets (SMC-like) with the damage frame locked at onset (spec B.8). */
+export function onsetParams(): fc.Arbitrary<MaterialParams> {
+  return admissibleParams({ allowContinue: true }).map((p) => {
+    const set = { ...p, E2: p.E1, G12: p.E1 / (2 * (1 + p.nu12)), frame: "onset" as const };
+    return toMaterialParams({ id: "P", ...parameterSetSchema.parse(set) });
+  });
+}
+
 /** Threshold strain and stress of the weaker family: the scale of a path for this set. */
 export function thresholdScale(p: MaterialParams): { strain: number; stress: number } {
   const E = Math.min(p.E1, p.E2);

@@ -8,7 +8,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { runPath } from "@/lib/mechanics/driver";
 import type { Leg, MaterialParams, ResultColumns } from "@/lib/mechanics/types";
-import { DEMO, mixedPath, paramsAndPath } from "./arbitraries";
+import { DEMO, mixedPath, onsetParams, paramsAndPath } from "./arbitraries";
 
 /** Returns the first violated property as text, or null. */
 function violation(p: MaterialParams, columns: ResultColumns, rows: number): string | null {
@@ -59,6 +59,16 @@ describe("dissipation and damage bounds on random mixed-control paths", () => {
         check(DEMO, legs),
       ),
       { numRuns: 100, seed: 7 },
+    );
+  });
+
+  it('hold for 60 random isotropic sets with frame "onset" and paths', () => {
+    const cases = onsetParams().chain((params) =>
+      mixedPath(params, { legs: [2, 6], increments: [5, 40] }).map((legs) => ({ params, legs })),
+    );
+    fc.assert(
+      fc.property(cases, ({ params, legs }) => check(params, legs)),
+      { numRuns: 60, seed: 8 },
     );
   });
 
