@@ -21,6 +21,9 @@ interface Slot {
   api: Comlink.Remote<SolverApi>;
   runId: number;
   handlers: RunHandlers | null;
+  /** Rows received for the current run, and its completion waiting for the last chunks. */
+  received: number;
+  finish: { rows: number; done: () => void } | null;
 }
 
 /** A message fit for the page: the error's own words, never a stack. */
@@ -45,10 +48,15 @@ export class SolverPool {
   private spawn(): Slot {
     const worker = new Worker(new URL("./solver.worker.ts", import.meta.url), { name: "solver" });
     const api = Comlink.wrap<SolverApi>(worker);
-    const slot: Slot = { worker, api, runId: 0, handlers: null };
+    const slot: Slot = { worker, api, runId: 0, handlers: null, received: 0, finish: null };
     const sink: SolverSink = {
       start: (id, total) => id === slot.runId && slot.handlers?.onStart(total),
-      chunk: (id, chunk) => id === slot.runId && slot.handlers?.onChunk(chunk),
+      chunk: (id, chunk) => {
+        if (id !== slot.runId || !slot.handlers) return;
+        slot.handlers.onChunk(chunk);
+        slot.received += chunk.count;
+        if (slot.finish && slot.received >= slot.finish.rows) slot.finish.done();
+      },
     };
     void api.connect(Comlink.proxy(sink));
     worker.addEventListener("error", (e) => {
@@ -88,15 +96,24 @@ export class SolverPool {
     const runId = this.nextRunId++;
     slot.runId = runId;
     slot.handlers = handlers;
+    slot.received = 0;
+    slot.finish = null;
     this.active.set(key, slot);
     slot.api.run(runId, params, legs).then(
-      ({ status, scope }) => {
+      ({ status, scope, rows }) => {
         if (slot.runId !== runId) return;
-        slot.handlers = null;
-        this.active.delete(key);
-        if (this.idle.length < 2) this.idle.push(slot);
-        else slot.worker.terminate();
-        handlers.onDone(status, scope);
+        // The result and the chunks travel on different channels: finish after the last chunk.
+        const done = () => {
+          if (slot.runId !== runId) return;
+          slot.handlers = null;
+          slot.finish = null;
+          this.active.delete(key);
+          if (this.idle.length < 2) this.idle.push(slot);
+          else slot.worker.terminate();
+          handlers.onDone(status, scope);
+        };
+        if (slot.received >= rows) done();
+        else slot.finish = { rows, done };
       },
       (err: unknown) => {
         if (slot.runId !== runId) return;

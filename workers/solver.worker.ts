@@ -21,13 +21,18 @@ const api = {
     sink = s;
   },
   /** Runs the path; `scope` names the global scope it ran in (for the browser test). */
-  run(runId: number, params: MaterialParams, legs: Leg[]): { status: RunStatus; scope: string } {
+  run(
+    runId: number,
+    params: MaterialParams,
+    legs: Leg[],
+  ): { status: RunStatus; scope: string; rows: number } {
     const run = new PathRun(params, legs);
     sink?.start(runId, run.columns.step.length);
     const status = runInChunks(run, (chunk) =>
       sink?.chunk(runId, Comlink.transfer(chunk, chunkTransferables(chunk))),
     );
-    return { status, scope: Object.prototype.toString.call(self).slice(8, -1) };
+    // `rows` lets the page wait for chunks still in flight on the sink's own channel.
+    return { status, scope: Object.prototype.toString.call(self).slice(8, -1), rows: run.rows };
   },
 };
 
