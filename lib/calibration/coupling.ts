@@ -7,7 +7,7 @@
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { damageAtPeak, goldenSection } from "./golden-section";
 import type { LoopModulus } from "./loop-moduli";
-import { replayRecord } from "./replay";
+import { replayError } from "./replay";
 import type { RecordPoints } from "./types";
 
 export interface CouplingFromTransverse {
@@ -51,15 +51,7 @@ export function couplingFromOffAxis(
   orientation: number,
   p: MaterialParams,
 ): number {
-  const error = (b: number) => {
-    const { predicted } = replayRecord(
-      { ...p, b, frame: "fixed", thetaD: -orientation },
-      "tension-1",
-      points,
-    );
-    let s = 0;
-    for (let i = 0; i < predicted.length; i++) s += (predicted[i] - points.stress[i]) ** 2;
-    return s;
-  };
+  const error = (b: number) =>
+    replayError({ ...p, b, frame: "fixed", thetaD: -orientation }, "tension-1", points);
   return goldenSection(error, 0, 1, 1e-4);
 }

@@ -23,16 +23,26 @@ export interface AxisIdentification {
   warnings: Warning[];
 }
 
+/**
+ * `modulus`: with hysteresis (unloading and reloading slopes differ by more than 10 %) the user
+ * may take the valley→peak chord instead of the unloading fit (spec E.3; default unloading).
+ */
 export function identifyAxis(
   record: TestRecordInput,
   law: DamageLaw = "sqrtY",
+  modulus: "unloading" | "chord" = "unloading",
 ): AxisIdentification {
   const clean = cleanRecord(record.points);
   const warnings: Warning[] = [];
   const byStress = record.control === "stress";
   const control = byStress ? clean.stress : clean.strain;
   const turns = findTurningPoints(control, byStress ? clean.noiseStress : clean.noiseStrain);
-  const { loops: measured, rejected } = measureLoops(clean.strain, clean.stress, turns);
+  const found = measureLoops(clean.strain, clean.stress, turns);
+  const rejected = found.rejected;
+  const measured =
+    modulus === "chord"
+      ? found.loops.map((l) => (l.chordE === null ? l : { ...l, E: l.chordE }))
+      : found.loops;
   const E0 = initialModulus(clean.strain, clean.stress, measured);
   if (E0 === null) {
     warnings.push("insufficient loops");

@@ -11,6 +11,7 @@ import { failureDamage } from "./failure-damage";
 import { identifyAxis, poissonFromRamp, type AxisIdentification } from "./identify-axis";
 import { measureLoops } from "./loop-moduli";
 import { canReplay } from "./replay";
+import { checkParams } from "@/lib/mechanics/validate";
 import { shearWeightByReplay, shearWeightClosedForm } from "./shear-weight";
 import { findTurningPoints } from "./turning-points";
 import type { LoopRow, TestRecordInput, Warning } from "./types";
@@ -20,6 +21,7 @@ import { initialModulus } from "./initial-modulus";
 export interface IdentifyOptions {
   base: MaterialParams; // values for what the records do not inform
   law?: DamageLaw;
+  modulus?: "unloading" | "chord"; // per-loop modulus when loops show hysteresis (spec E.3)
   isotropic?: boolean; // default: true when no tension-2 record is given
 }
 
@@ -63,7 +65,7 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
   ] as const) {
     let done = false;
     for (const record of byType(type)) {
-      const axis = identifyAxis(record, law);
+      const axis = identifyAxis(record, law, options.modulus);
       reports.set(record.id, { axis, extra: [] });
       if (done || !axis.E0 || !axis.threshold) continue;
       set(keys.E, axis.E0.E0);
@@ -159,6 +161,9 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
     }
   }
 
+  // Replay only an admissible set; otherwise say which values the law cannot take.
+  const problems = checkParams(p);
+  if (problems.length > 0) notes.push(`no replay validation: ${problems.join("; ")}`);
   const reportList: RecordReport[] = records.map((record) => {
     const entry = reports.get(record.id);
     const axis = entry?.axis ?? null;
@@ -172,7 +177,7 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
       freeIntercept: axis?.frozen?.freeIntercept ?? null,
       warnings: [...(axis?.warnings ?? []), ...(entry?.extra ?? [])],
       validation:
-        canReplay(record.testType) && clean.strain.length > 0
+        problems.length === 0 && canReplay(record.testType) && clean.strain.length > 0
           ? validateByReplay(p, record.testType, clean)
           : null,
     };

@@ -4,6 +4,7 @@
  * and the model's stress in that direction is read back sample by sample.
  */
 import { runPath } from "@/lib/mechanics/driver";
+import { MechanicsInputError } from "@/lib/mechanics/validate";
 import type {
   ControlKind,
   Leg,
@@ -90,4 +91,22 @@ export function replayRecord(
   const completed = Math.min(n, result.rows - 1);
   for (let i = 0; i < completed; i++) predicted[i] = column[i + 1]; // row 0 is the initial state
   return { predicted, status: result.status, completed };
+}
+
+/** Squared stress error of a replay, or Infinity when the trial parameters are inadmissible. */
+export function replayError(
+  params: MaterialParams,
+  testType: TestType,
+  points: RecordPoints,
+): number {
+  let predicted: Float64Array;
+  try {
+    predicted = replayRecord(params, testType, points).predicted;
+  } catch (error) {
+    if (error instanceof MechanicsInputError) return Number.POSITIVE_INFINITY;
+    throw error;
+  }
+  let s = 0;
+  for (let i = 0; i < predicted.length; i++) s += (predicted[i] - points.stress[i]) ** 2;
+  return s;
 }

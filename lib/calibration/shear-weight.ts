@@ -6,7 +6,7 @@
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { damageAtPeak, goldenSection } from "./golden-section";
 import type { LoopModulus } from "./loop-moduli";
-import { replayRecord } from "./replay";
+import { replayError } from "./replay";
 import type { RecordPoints } from "./types";
 
 /** Loop moduli here are G_k (τ against engineering γ); sigMax is τmax_k. */
@@ -23,11 +23,6 @@ export function shearWeightClosedForm(loops: LoopModulus[], p: MaterialParams): 
 }
 
 export function shearWeightByReplay(points: RecordPoints, p: MaterialParams): number {
-  const error = (k6: number) => {
-    const { predicted } = replayRecord({ ...p, k6 }, "shear-12", points);
-    let s = 0;
-    for (let i = 0; i < predicted.length; i++) s += (predicted[i] - points.stress[i]) ** 2;
-    return s;
-  };
+  const error = (k6: number) => replayError({ ...p, k6 }, "shear-12", points);
   return goldenSection(error, 0, 3, 1e-4);
 }

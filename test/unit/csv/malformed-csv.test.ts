@@ -98,3 +98,27 @@ describe("malformed files", () => {
     );
   });
 });
+
+describe("arbitrary text", () => {
+  it("never throws: either points or one message with no points", async () => {
+    const fc = (await import("fast-check")).default;
+    const text = fc.oneof(
+      fc.string({ maxLength: 300 }),
+      fc
+        .array(fc.constantFrom("1", "2.5", ",", ";", "\t", "\n", '"', "x", "0,5", "e", "-", " "), {
+          maxLength: 200,
+        })
+        .map((a) => a.join("")),
+    );
+    fc.assert(
+      fc.property(text, (t) => {
+        const result = readCurveCsv(t);
+        if (!result.ok) {
+          expect(result.points).toBeNull();
+          expect(result.error.message.length).toBeGreaterThan(0);
+        }
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
