@@ -92,6 +92,12 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
       done = true;
     }
   }
+  // E.7: without a transverse strain in direction 1, nu21 from direction 2 (nu12 = nu21·E1/E2).
+  const axis2 = byType("tension-2").map((r) => reports.get(r.id)?.axis)[0];
+  if (!identified.has("nu12") && axis2?.loops.length) {
+    const nu21 = poissonFromRamp(axis2.clean, axis2.loops[0].peakIndex);
+    if (nu21 !== null) set("nu12", (nu21 * p.E1) / p.E2);
+  }
   const isotropic = options.isotropic ?? byType("tension-2").length === 0;
   if (isotropic) {
     p.E2 = p.E1;

@@ -4,7 +4,7 @@ import type { RecordPoints } from "@/lib/calibration/types";
 import { runPath } from "@/lib/mechanics/driver";
 import type { ControlKind, Leg, MaterialParams, ResultColumn } from "@/lib/mechanics/types";
 
-type Kind = "tension-1" | "shear-12" | "equibiaxial";
+type Kind = "tension-1" | "tension-2" | "shear-12" | "equibiaxial";
 
 const SETUP: Record<
   Kind,
@@ -14,6 +14,7 @@ const SETUP: Record<
     at: (v: number) => [number, number, number];
     eps: ResultColumn;
     sig: ResultColumn;
+    transverse?: ResultColumn;
   }
 > = {
   "tension-1": {
@@ -22,6 +23,15 @@ const SETUP: Record<
     at: (v) => [v, 0, 0],
     eps: "eps11",
     sig: "sig11",
+    transverse: "eps22",
+  },
+  "tension-2": {
+    load: ["stress", "strain", "stress"],
+    unload: ["stress", "stress", "stress"],
+    at: (v) => [0, v, 0],
+    eps: "eps22",
+    sig: "sig22",
+    transverse: "eps11",
   },
   "shear-12": {
     load: ["stress", "stress", "strain"],
@@ -73,5 +83,9 @@ export function cyclicRecord(
     Float64Array.from(run.columns[col].subarray(0, run.rows), (v) =>
       half > 0 ? v + half * (2 * random() - 1) : v,
     );
-  return { strain: take(s.eps, o.noiseStrain ?? 0), stress: take(s.sig, o.noiseStress ?? 0) };
+  return {
+    strain: take(s.eps, o.noiseStrain ?? 0),
+    stress: take(s.sig, o.noiseStress ?? 0),
+    transverseStrain: s.transverse && take(s.transverse, o.noiseStrain ?? 0),
+  };
 }
