@@ -2,8 +2,9 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { PARAMETER_FIELDS, type ParameterField } from "@/lib/scenario/parameter-fields";
+import { rangeFor, unitFor } from "@/lib/workbench/field-text";
 import {
   type ParameterSet,
   type ParameterSetInput,
@@ -46,6 +47,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
     defaultValues: set,
   });
   const { errors } = form.formState;
+  const law = String(useWatch({ control: form.control, name: "law" }) ?? "sqrtY");
 
   useEffect(() => {
     return form.subscribe({
@@ -84,8 +86,8 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                     title={f.meaning}
                   >
                     <span className="font-medium">{symbol}</span>
-                    {f.unit && f.unit !== "–" ? (
-                      <span className="truncate text-xs text-ink-faint">{f.unit}</span>
+                    {unitFor(f, law) && f.unit !== "–" ? (
+                      <span className="truncate text-xs text-ink-faint">{unitFor(f, law)}</span>
                     ) : null}
                   </label>
                   {f.kind === "choice" ? (
@@ -116,7 +118,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                     id={`${id}-hint`}
                     className={`mt-0.5 text-xs ${error ? "text-kiln-dark" : "text-ink-faint"}`}
                   >
-                    {error ? `${symbol} ${error}` : f.range}
+                    {error ? `${symbol} ${error}` : rangeFor(f, law)}
                   </p>
                 </div>
               );

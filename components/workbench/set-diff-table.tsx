@@ -22,7 +22,7 @@ export function SetDiffTable({ entries }: SetDiffTableProps) {
       aria-label={label}
       value={value}
       onChange={(e) => set(e.target.value)}
-      className="rounded border border-glaze-line bg-white px-1 py-0.5 text-xs"
+      className="w-full max-w-full truncate rounded border border-glaze-line bg-white px-1 py-0.5 text-xs"
     >
       {entries.map((e) => (
         <option key={e.set.id} value={e.set.id}>
@@ -32,15 +32,15 @@ export function SetDiffTable({ entries }: SetDiffTableProps) {
     </select>
   );
   return (
-    <table className="w-full text-xs" data-testid="set-diff">
+    <table className="w-full table-fixed text-xs" data-testid="set-diff">
       <thead>
         <tr className="text-left">
-          <th scope="col" className="py-1">
+          <th scope="col" className="w-16 py-1">
             value
           </th>
           <th scope="col">{pick(a.set.id, setLeft, "First set to compare")}</th>
           <th scope="col">{pick(b.set.id, setRight, "Second set to compare")}</th>
-          <th scope="col" className="text-right">
+          <th scope="col" className="w-16 text-right">
             change
           </th>
         </tr>

@@ -87,7 +87,7 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
     key: "permanent-strain",
     title: "Permanent strain against increment",
     xTitle: "increment",
-    yTitle: "permanent strain (mm/mm)",
+    yTitle: "εp (mm/mm)",
     xUnit: "",
     yUnit: "mm/mm",
     series: [
@@ -101,7 +101,7 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
     key: "energy",
     title: "Work, stored and dissipated energy",
     xTitle: "increment",
-    yTitle: "energy density (MPa = MJ/m³)",
+    yTitle: "W, ψ, Φ (MPa = MJ/m³)",
     xUnit: "",
     yUnit: "MPa",
     series: [

@@ -62,7 +62,7 @@ export function buildChart(
         mode: "lines",
         x: pick(src.columns[s.x], idx),
         y: pick(src.columns[s.y], idx),
-        name: def.series.length > 1 ? `${tag} · ${s.name}` : tag,
+        name: def.series.length > 1 ? `${src.id} · ${s.name}` : tag,
         legendgroup: src.id,
         showlegend: k === 0 || def.series.length > 1,
         meta: { set: src.id, series: s.key },
