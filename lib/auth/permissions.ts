@@ -11,6 +11,8 @@ export const CAPABILITIES = [
   "member:invite",
   "member:change-role",
   "member:remove",
+  // Loading a whole team export replaces nothing but writes everything: owners only.
+  "team:import",
   "scenario:edit",
   "parameter-set:edit",
   "test-record:edit",

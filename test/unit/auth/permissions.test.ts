@@ -58,6 +58,7 @@ describe("role → capability table", () => {
       "member:invite",
       "member:change-role",
       "member:remove",
+      "team:import",
     ];
     for (const capability of ownerOnly) {
       expect(ROLES.filter((r) => can(r, capability))).toEqual(["owner"]);
