@@ -117,7 +117,9 @@ export function refine(
   let rounds = 0;
   let cancelled = false;
   try {
-    for (rounds = 1; rounds <= (options.maxRounds ?? 12); rounds++) {
+    const maxRounds = options.maxRounds ?? 12;
+    while (rounds < maxRounds) {
+      rounds++;
       const fit = levenbergMarquardt(
         data,
         (p) => {
