@@ -8,6 +8,7 @@ import type { ColumnMappingChoice } from "./record-schema";
 import type { CurveTable } from "./parse-table";
 import {
   detectStrainUnit,
+  headerUnitText,
   detectStressUnit,
   STRAIN_FACTOR,
   STRESS_FACTOR,
@@ -56,6 +57,8 @@ export function extractPoints(table: CurveTable, mapping: ColumnMappingChoice): 
       return { ok: false, error: csvError("not-a-number", what, bad.line, table.headers[index]) };
     }
   }
+  const unknown = unknownHeaderUnit(table, mapping);
+  if (unknown) return { ok: false, error: unknown };
   const warnings: string[] = [];
   const strainHeader = table.headers[mapping.strain];
   const stressHeader = table.headers[mapping.stress];
@@ -108,4 +111,35 @@ export function extractPoints(table: CurveTable, mapping: ColumnMappingChoice): 
       stressUnit,
     },
   };
+}
+
+/** A unit written in the header that the reader does not know must not be guessed around. */
+function unknownHeaderUnit(table: CurveTable, mapping: ColumnMappingChoice): CsvError | null {
+  const checks = [
+    {
+      auto: mapping.strainUnit === "auto",
+      index: mapping.strain,
+      known: strainUnitFromHeader,
+      list: "%, mm/mm",
+    },
+    {
+      auto: mapping.stressUnit === "auto",
+      index: mapping.stress,
+      known: stressUnitFromHeader,
+      list: "Pa, kPa, MPa, GPa",
+    },
+  ];
+  for (const c of checks) {
+    const header = table.headers[c.index];
+    const unit = headerUnitText(header);
+    if (c.auto && table.hasHeader && unit !== null && unit !== "" && c.known(header) === null) {
+      return csvError(
+        "mapping",
+        `unit "${unit}" is not one of ${c.list}; choose the unit in the mapping step.`,
+        table.headerLine,
+        header,
+      );
+    }
+  }
+  return null;
 }

@@ -19,6 +19,7 @@ export interface BadCell {
 export interface CurveTable {
   headers: string[]; // from the header row, or "column 1", "column 2", …
   hasHeader: boolean;
+  headerLine: number; // physical line of the header (or of the first data row without one)
   delimiter: Delimiter;
   decimalComma: boolean;
   rowCount: number;
@@ -151,6 +152,7 @@ class TableBuilder {
       table: {
         headers: this.headers,
         hasHeader: this.hasHeader,
+        headerLine: this.firstLine,
         delimiter,
         decimalComma: this.decimalComma,
         rowCount: this.lines.length,

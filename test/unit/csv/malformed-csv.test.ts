@@ -92,6 +92,18 @@ describe("malformed files", () => {
       );
   });
 
+  it("a unit in the header that is not supported", () => {
+    expect(rejected("\nstrain [%],stress [psi]\n0.1,1000\n").message).toBe(
+      'line 2, column "stress [psi]": unit "psi" is not one of Pa, kPa, MPa, GPa; choose the unit in the mapping step.',
+    );
+    const chosen = readCurveCsv("strain [%],stress [psi]\n0.1,1000\n", {
+      strain: 0,
+      stress: 1,
+      stressUnit: "kPa",
+    });
+    expect(chosen.ok).toBe(true);
+  });
+
   it("a header with no recognisable strain or stress", () => {
     expect(rejected("force,position\n1,2\n").message).toBe(
       "no strain and stress columns recognised in the header; map them by hand.",
