@@ -13,6 +13,7 @@ import {
   kellyTysonCriticalLength,
   kellyTysonStrength,
 } from "@/lib/micromechanics/shear-lag";
+import { elasticStart } from "@/lib/micromechanics/starting-values";
 import { volumeFraction } from "@/lib/micromechanics/volume-fraction";
 
 const glass = { Ef: 72000, nuf: 0.22 };
@@ -114,5 +115,20 @@ describe("Kelly–Tyson (Kelly & Tyson 1965; spec A.4 example)", () => {
 describe("weight → volume fraction (spec A.4)", () => {
   it("PA66-GF30: 30 wt%, rho 2.54 / 1.14 → 0.1613", () => {
     near(volumeFraction(0.3, 2.54, 1.14), 0.1613, 4);
+  });
+});
+
+describe("elastic starting values of a parameter set", () => {
+  it("planar random: in-plane isotropic from the exact average (spec A.4 SMC-like row)", () => {
+    const start = elasticStart(smc, "planar-random");
+    near(start.E1, 8827.0, 5);
+    expect(start.E2).toBe(start.E1);
+    near(start.nu12, 0.336, 3);
+    near(start.G12, 3303.3, 5);
+  });
+  it("aligned: the Halpin–Tsai ply (spec A.4 PA66-GF30 row)", () => {
+    const start = elasticStart(pa66, "aligned");
+    near(start.E1, 11060, 4);
+    near(start.E2, 4494.7, 5);
   });
 });
