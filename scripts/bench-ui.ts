@@ -108,6 +108,15 @@ async function main() {
       env: { ...process.env, NODE_ENV: "production" },
     });
   }
+  if (
+    await fetch(`http://127.0.0.1:${PORT}/`).then(
+      () => true,
+      () => false,
+    )
+  )
+    throw new Error(
+      `port ${PORT} is taken (an old server would serve a stale build); set BENCH_PORT`,
+    );
   const server: ChildProcess = spawn(
     "npx",
     ["next", "start", "-H", "127.0.0.1", "-p", String(PORT)],
@@ -132,6 +141,8 @@ async function main() {
       args: ARGS,
     });
     const page = await browser.newPage({ viewport: { width: 1366, height: 900 } });
+    // tsx (esbuild) wraps named functions in __name(); give the page a no-op of it.
+    await page.addInitScript({ content: "window.__name = (f) => f;" });
     await page.addInitScript(() => {
       window.__benchTasks = [];
       new PerformanceObserver((list) => {

@@ -33,18 +33,20 @@ export function ResultChart({
 }: ResultChartProps) {
   const version = useDrawVersion(store);
   const graph = useRef<HTMLElement | null>(null);
+  // Only what is drawn of each set: a parameter edit must not redraw the old curves at once;
+  // the new rows arrive through the store and redraw one chart per task.
+  const look = JSON.stringify(entries.map((e) => [e.set.id, e.color, e.visible, e.set.label]));
   const built = useMemo(() => {
     const sources: TraceSource[] = [];
-    for (const e of entries) {
-      const buf = store.get(e.set.id)?.buffer;
-      if (!e.visible || !buf) continue;
-      sources.push({
-        id: e.set.id,
-        label: e.set.label,
-        color: e.color,
-        columns: buf.columns,
-        rows: buf.rows,
-      });
+    for (const [id, color, visible, label] of JSON.parse(look) as [
+      string,
+      string,
+      boolean,
+      string,
+    ][]) {
+      const buf = store.get(id)?.buffer;
+      if (!visible || !buf) continue;
+      sources.push({ id, label, color, columns: buf.columns, rows: buf.rows });
     }
     return {
       ...buildChart(def, sources, cursor),
@@ -52,8 +54,7 @@ export function ResultChart({
       gen: store.generation,
       complete: store.settled,
     };
-    // version stands for the buffers' contents, which change in place
-  }, [def, entries, cursor, version, store]);
+  }, [def, look, cursor, version, store]);
   const layout = useMemo(() => chartLayout(def), [def]);
 
   const drawn = (_fig: unknown, gd: HTMLElement) => {

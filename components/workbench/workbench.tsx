@@ -105,7 +105,7 @@ export function Workbench({ initialScenario, readOnly, onSave, syncUrl }: Workbe
           </Link>
         )}
       </div>
-      <div className="grid gap-4 lg:grid-cols-[minmax(320px,390px)_minmax(0,1fr)]">
+      <div className="grid gap-4 md:grid-cols-[minmax(270px,300px)_minmax(0,1fr)] xl:grid-cols-[minmax(320px,390px)_minmax(0,1fr)]">
         <div className="space-y-4">
           <Panel id="sets" title="Parameter sets">
             <SetListPanel

@@ -7,8 +7,8 @@ import type { ChartDef } from "./chart-defs";
 import { decimateIndices, pick } from "./decimate";
 import { findMarks } from "./marks";
 
-/** Buckets per curve: ≤ 6 points each, ~2,400 points per trace at most. */
-export const DISPLAY_BUCKETS = 400;
+/** Buckets per curve: ≤ 6 points each, ~1,500 points per trace at most. */
+export const DISPLAY_BUCKETS = 250;
 
 export interface TraceSource {
   id: string;
