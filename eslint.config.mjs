@@ -7,6 +7,7 @@ const config = [
   {
     ignores: [
       ".next/**",
+      ".next-test/**",
       "node_modules/**",
       ".data/**",
       ".test-data/**",

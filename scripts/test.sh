@@ -16,6 +16,9 @@ PGPORT=${TEST_PG_PORT:-$((55000 + $$ % 900))}
 SMTP_PORT=${TEST_SMTP_PORT:-$((26000 + $$ % 900))}
 APP_PORT=${TEST_APP_PORT:-$((31000 + $$ % 900))}
 REPORTS=$RUN_DIR/reports
+# A build of our own (see next.config.ts); the name is fixed because Next rewrites tsconfig.json
+# for any build folder it does not list yet.
+export CRAQUELURE_DIST_DIR=.next-test
 mkdir -p "$REPORTS" artifacts/screenshots
 
 passed=0
