@@ -1,0 +1,27 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { apiRoute } from "@/lib/api/route";
+import { mailDeps } from "@/lib/email/deps";
+import { changeReview, reviewHistory } from "@/lib/workspace/review";
+
+type Params = { team: string; scenario: string; number: string };
+
+/** team:read → ReviewHistoryResponse. */
+export const GET = apiRoute<Params>(({ db, actor, params }) =>
+  reviewHistory(db, actor, params.team, params.scenario, params.number),
+);
+
+/**
+ * body ReviewActionInput { action: request | approve | request-changes, note? }:
+ * request needs scenario:edit, verdicts need review:verdict → ReviewActionResponse.
+ */
+export const POST = apiRoute<Params>(async ({ db, actor, params, request }) =>
+  changeReview(
+    db,
+    actor,
+    params.team,
+    params.scenario,
+    params.number,
+    await readJsonBody(request, BODY_LIMITS.small),
+    mailDeps(),
+  ),
+);

@@ -1,0 +1,19 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { apiRoute, Created } from "@/lib/api/route";
+import { listRevisions, saveRevision } from "@/lib/workspace/revisions";
+
+type Params = { team: string; scenario: string };
+
+/** team:read → RevisionListResponse (newest first). */
+export const GET = apiRoute<Params>(({ db, actor, params }) =>
+  listRevisions(db, actor, params.team, params.scenario),
+);
+
+/**
+ * scenario:edit; body SaveRevisionInput { baseRevision, message, file } → 201
+ * SaveRevisionResponse, or 409 conflict:revision with `latest: { number, author, at }`.
+ */
+export const POST = apiRoute<Params>(async ({ db, actor, params, request }) => {
+  const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  return new Created(await saveRevision(db, actor, params.team, params.scenario, body));
+});

@@ -1,0 +1,16 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { apiRoute, Created } from "@/lib/api/route";
+import { createScenario, listScenarios } from "@/lib/workspace/scenarios";
+
+type Params = { team: string };
+
+/** team:read → ScenarioListResponse (query: sort, dir, tag, review, author, q, page, pageSize). */
+export const GET = apiRoute<Params>(({ db, actor, params, query }) =>
+  listScenarios(db, actor, params.team, query),
+);
+
+/** scenario:edit; body CreateScenarioInput → 201 CreateScenarioResponse. */
+export const POST = apiRoute<Params>(async ({ db, actor, params, request }) => {
+  const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  return new Created(await createScenario(db, actor, params.team, body));
+});

@@ -1,0 +1,42 @@
+import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
+
+import type { Executor } from "@/db/client";
+import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { memberships } from "@/db/schema/teams";
+import { users } from "@/db/schema/users";
+
+export interface Recipient {
+  id: string;
+  email: string;
+  name: string;
+}
+
+/**
+ * Who hears about a review: the scenario's editors (its creator and the authors of its
+ * revisions, while they still edit in this team), plus, when asked, the team's reviewers and
+ * owners (who give verdicts) and any extra people (the one who requested the review).
+ */
+export async function reviewRecipients(
+  db: Executor,
+  opts: { teamId: string; scenarioId: string; includeReviewers: boolean; extra?: string[] },
+): Promise<Recipient[]> {
+  const contributors = sql`(
+    select ${scenarioRevisions.authorId} from ${scenarioRevisions}
+    where ${scenarioRevisions.scenarioId} = ${opts.scenarioId}
+    union select ${scenarios.createdBy} from ${scenarios} where ${scenarios.id} = ${opts.scenarioId}
+  )`;
+  const who: SQL[] = [
+    and(
+      sql`${memberships.userId} in ${contributors}`,
+      inArray(memberships.role, ["owner", "editor"]),
+    )!,
+  ];
+  if (opts.includeReviewers) who.push(inArray(memberships.role, ["owner", "reviewer"]));
+  if (opts.extra?.length) who.push(inArray(memberships.userId, opts.extra));
+  return db
+    .selectDistinct({ id: users.id, email: users.email, name: users.name })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.teamId, opts.teamId), or(...who)))
+    .orderBy(users.email);
+}

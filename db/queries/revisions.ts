@@ -1,0 +1,93 @@
+import { and, desc, eq } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+
+import type { Executor } from "@/db/client";
+import { reviewEvents, scenarioRevisions } from "@/db/schema/scenarios";
+import { users } from "@/db/schema/users";
+
+import { personRef } from "./users-view";
+
+// Revisions of one scenario. The caller has found the scenario in the actor's team.
+
+const author = alias(users, "author");
+const reviewer = alias(users, "reviewer");
+
+const metaColumns = {
+  id: scenarioRevisions.id,
+  number: scenarioRevisions.number,
+  author: personRef(author.id, author.name),
+  message: scenarioRevisions.message,
+  createdAt: scenarioRevisions.createdAt,
+  reviewState: scenarioRevisions.reviewState,
+  reviewBy: personRef(reviewer.id, reviewer.name),
+  reviewAt: scenarioRevisions.reviewAt,
+};
+
+function metaQuery(db: Executor) {
+  return db
+    .select(metaColumns)
+    .from(scenarioRevisions)
+    .leftJoin(author, eq(author.id, scenarioRevisions.authorId))
+    .leftJoin(reviewer, eq(reviewer.id, scenarioRevisions.reviewBy));
+}
+
+type MetaRow = Awaited<ReturnType<ReturnType<typeof metaQuery>["execute"]>>[number];
+
+export function toRevisionMeta(row: MetaRow) {
+  return {
+    id: row.id,
+    number: row.number,
+    author: row.author,
+    message: row.message,
+    createdAt: row.createdAt.toISOString(),
+    review: {
+      state: row.reviewState,
+      by: row.reviewBy,
+      at: row.reviewAt?.toISOString() ?? null,
+    },
+  };
+}
+export type RevisionMeta = ReturnType<typeof toRevisionMeta>;
+
+export async function listRevisionsOfScenario(db: Executor, scenarioId: string) {
+  const rows = await metaQuery(db)
+    .where(eq(scenarioRevisions.scenarioId, scenarioId))
+    .orderBy(desc(scenarioRevisions.number));
+  return rows.map(toRevisionMeta);
+}
+
+export async function findRevisionMeta(db: Executor, scenarioId: string, number: number) {
+  const [row] = await metaQuery(db).where(
+    and(eq(scenarioRevisions.scenarioId, scenarioId), eq(scenarioRevisions.number, number)),
+  );
+  return row ? toRevisionMeta(row) : null;
+}
+
+/** The stored row, file included. */
+export async function findRevisionRow(db: Executor, scenarioId: string, number: number) {
+  const [row] = await db
+    .select()
+    .from(scenarioRevisions)
+    .where(and(eq(scenarioRevisions.scenarioId, scenarioId), eq(scenarioRevisions.number, number)));
+  return row ?? null;
+}
+
+const actor = alias(users, "actor");
+
+export async function listReviewEvents(db: Executor, revisionId: string) {
+  const rows = await db
+    .select({
+      id: reviewEvents.id,
+      from: reviewEvents.fromState,
+      to: reviewEvents.toState,
+      actor: personRef(actor.id, actor.name),
+      note: reviewEvents.note,
+      at: reviewEvents.at,
+    })
+    .from(reviewEvents)
+    .leftJoin(actor, eq(actor.id, reviewEvents.actorId))
+    .where(eq(reviewEvents.revisionId, revisionId))
+    .orderBy(reviewEvents.at, reviewEvents.id);
+  return rows.map((r) => ({ ...r, at: r.at.toISOString() }));
+}
+export type ReviewEventView = Awaited<ReturnType<typeof listReviewEvents>>[number];

@@ -1,0 +1,124 @@
+import { and, arrayContains, asc, count, desc, eq, ilike, type SQL } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+
+import type { Executor } from "@/db/client";
+import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { users } from "@/db/schema/users";
+import type { ScenarioListQuery } from "@/lib/validations/workspace";
+
+import { personRef } from "./users-view";
+
+// Read-side queries for the scenario aggregate. Callers have authorized the team already;
+// every query still filters by team id so another team's ids are simply not found.
+
+const creator = alias(users, "creator");
+const revAuthor = alias(users, "rev_author");
+const latest = alias(scenarioRevisions, "latest");
+
+const summaryColumns = {
+  id: scenarios.id,
+  name: scenarios.name,
+  materialLabel: scenarios.materialLabel,
+  tags: scenarios.tags,
+  createdBy: personRef(creator.id, creator.name),
+  createdAt: scenarios.createdAt,
+  updatedAt: scenarios.updatedAt,
+  latestRevision: scenarios.latestRevision,
+  latestAuthor: personRef(revAuthor.id, revAuthor.name),
+  latestSavedAt: latest.createdAt,
+  reviewState: latest.reviewState,
+};
+
+function summaryQuery(db: Executor) {
+  return db
+    .select(summaryColumns)
+    .from(scenarios)
+    .leftJoin(
+      latest,
+      and(eq(latest.scenarioId, scenarios.id), eq(latest.number, scenarios.latestRevision)),
+    )
+    .leftJoin(creator, eq(creator.id, scenarios.createdBy))
+    .leftJoin(revAuthor, eq(revAuthor.id, latest.authorId));
+}
+
+type SummaryRow = Awaited<ReturnType<ReturnType<typeof summaryQuery>["execute"]>>[number];
+
+/** One row of the scenarios table (name, material, latest revision, review state, author). */
+export function toScenarioSummary(row: SummaryRow) {
+  return {
+    id: row.id,
+    name: row.name,
+    materialLabel: row.materialLabel,
+    tags: row.tags,
+    createdBy: row.createdBy,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+    latestRevision: {
+      number: row.latestRevision,
+      author: row.latestAuthor,
+      savedAt: row.latestSavedAt?.toISOString() ?? null,
+      reviewState: row.reviewState ?? "draft",
+    },
+  };
+}
+export type ScenarioSummary = ReturnType<typeof toScenarioSummary>;
+
+function escapeLike(text: string): string {
+  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+export async function listScenariosForTeam(db: Executor, teamId: string, q: ScenarioListQuery) {
+  const conditions: SQL[] = [eq(scenarios.teamId, teamId)];
+  if (q.tag) conditions.push(arrayContains(scenarios.tags, [q.tag]));
+  if (q.author) conditions.push(eq(scenarios.createdBy, q.author));
+  if (q.q) conditions.push(ilike(scenarios.name, `%${escapeLike(q.q)}%`));
+  if (q.review) conditions.push(eq(latest.reviewState, q.review));
+  const where = and(...conditions);
+
+  const dir = (q.dir ?? (q.sort === "updated" ? "desc" : "asc")) === "asc" ? asc : desc;
+  const order =
+    q.sort === "name"
+      ? [dir(scenarios.name), asc(scenarios.id)]
+      : q.sort === "review"
+        ? [dir(latest.reviewState), desc(scenarios.updatedAt), asc(scenarios.id)]
+        : [dir(scenarios.updatedAt), dir(scenarios.id)];
+
+  const countQuery = db.select({ n: count() }).from(scenarios);
+  const counted = q.review
+    ? countQuery.innerJoin(
+        latest,
+        and(eq(latest.scenarioId, scenarios.id), eq(latest.number, scenarios.latestRevision)),
+      )
+    : countQuery;
+  const [rows, [total]] = await Promise.all([
+    summaryQuery(db)
+      .where(where)
+      .orderBy(...order)
+      .limit(q.pageSize)
+      .offset((q.page - 1) * q.pageSize),
+    counted.where(where),
+  ]);
+  return { items: rows.map(toScenarioSummary), total: total.n, page: q.page, pageSize: q.pageSize };
+}
+
+export async function findScenarioSummary(db: Executor, teamId: string, scenarioId: string) {
+  const [row] = await summaryQuery(db).where(
+    and(eq(scenarios.teamId, teamId), eq(scenarios.id, scenarioId)),
+  );
+  return row ? toScenarioSummary(row) : null;
+}
+
+/** The scenario row itself; `lock` takes the row lock that serialises saves. */
+export async function findScenarioRow(
+  db: Executor,
+  teamId: string,
+  scenarioId: string,
+  lock = false,
+) {
+  const query = db
+    .select()
+    .from(scenarios)
+    .where(and(eq(scenarios.teamId, teamId), eq(scenarios.id, scenarioId)));
+  const [row] = lock ? await query.for("update") : await query;
+  return row ?? null;
+}

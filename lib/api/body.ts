@@ -1,0 +1,55 @@
+import { AppError } from "@/lib/errors";
+
+export const BODY_LIMITS = {
+  /** Small forms: names, comments, verdicts. */
+  small: 64 * 1024,
+  /** A scenario file with its path (long generated cycle paths stay well below this). */
+  scenario: 4 * 1024 * 1024,
+  /** A whole team export. */
+  teamImport: 64 * 1024 * 1024,
+} as const;
+
+function tooLarge(limit: number): AppError {
+  const size = limit >= 1024 * 1024 ? `${limit / 1024 / 1024} MB` : `${limit / 1024} KB`;
+  return new AppError("invalid:too-large", `The request body is larger than ${size}.`);
+}
+
+/**
+ * Reads a JSON body up to `limit` bytes. The stream is cut off at the limit, so a client that
+ * lies about Content-Length cannot make the server buffer more than that.
+ */
+export async function readJsonBody(
+  request: Request,
+  limit: number,
+  options: { optional?: boolean } = {},
+): Promise<unknown> {
+  const declared = Number(request.headers.get("content-length") ?? "0");
+  if (declared > limit) throw tooLarge(limit);
+  const reader = request.body?.getReader();
+  if (!reader) {
+    if (options.optional) return undefined;
+    throw new AppError("invalid:body", "Send a JSON body.");
+  }
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > limit) {
+      await reader.cancel();
+      throw tooLarge(limit);
+    }
+    chunks.push(value);
+  }
+  const text = new TextDecoder().decode(Buffer.concat(chunks));
+  if (text.trim() === "") {
+    if (options.optional) return undefined;
+    throw new AppError("invalid:body", "Send a JSON body.");
+  }
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError("invalid:json", "The request body is not valid JSON.");
+  }
+}

@@ -1,0 +1,42 @@
+import { isAppError, MASKED_MESSAGE } from "@/lib/errors";
+import { DetailedAppError } from "@/lib/workspace/errors";
+
+/** The one error shape of the JSON API. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; path?: string; [detail: string]: unknown };
+}
+
+const STATUS_BY_PREFIX: [string, number][] = [
+  ["unauthenticated", 401],
+  ["unverified", 403],
+  ["invalid:too-large", 413],
+  ["invalid:", 400],
+  ["forbidden:", 403],
+  ["not-found:", 404],
+  ["conflict:", 409],
+  ["expired:", 410],
+  ["used:", 410],
+  ["rate-limited:", 429],
+];
+
+export function statusOf(code: string): number {
+  return STATUS_BY_PREFIX.find(([prefix]) => code.startsWith(prefix))?.[1] ?? 400;
+}
+
+const NO_STORE = { "cache-control": "no-store" };
+
+export function jsonResponse(data: unknown, status = 200): Response {
+  return Response.json(data, { status, headers: NO_STORE });
+}
+
+/** Expected errors keep their code and message; anything else is logged and masked. */
+export function errorResponse(error: unknown): Response {
+  if (isAppError(error)) {
+    const body: ApiErrorBody = { error: { code: error.code, message: error.message } };
+    if (error.field) body.error.path = error.field;
+    if (error instanceof DetailedAppError) Object.assign(body.error, error.details);
+    return jsonResponse(body, statusOf(error.code));
+  }
+  console.error("[api unexpected]", error);
+  return jsonResponse({ error: { code: "internal", message: MASKED_MESSAGE } }, 500);
+}
