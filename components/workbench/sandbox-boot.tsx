@@ -1,22 +1,22 @@
 "use client";
 
 import { useState } from "react";
-import { defaultWorkbenchState } from "@/lib/workbench/default-scenario";
-import type { WorkbenchState } from "@/lib/workbench/scenario-state";
+import { defaultScenario } from "@/lib/workbench/default-scenario";
+import type { OpenedScenario } from "@/lib/workbench/scenario-state";
 import { decodeState, readHash } from "@/lib/workbench/url-state";
 import { Workbench } from "./workbench";
 
-function boot(): { state: WorkbenchState; error: string[] | null } {
+function boot(): { scenario: OpenedScenario; error: string[] | null } {
   const encoded = readHash(window.location.hash);
-  if (!encoded) return { state: defaultWorkbenchState(), error: null };
+  if (!encoded) return { scenario: defaultScenario(), error: null };
   const decoded = decodeState(encoded);
-  if (decoded.ok) return { state: decoded.state, error: null };
-  return { state: defaultWorkbenchState(), error: decoded.errors };
+  if (decoded.ok) return { scenario: decoded.scenario, error: null };
+  return { scenario: defaultScenario(), error: decoded.errors };
 }
 
 /** Opens the scenario of the link if there is one, else the default; says why a link failed. */
 export function SandboxBoot() {
-  const [{ state, error }] = useState(boot);
+  const [{ scenario, error }] = useState(boot);
   return (
     <>
       {error && (
@@ -32,7 +32,7 @@ export function SandboxBoot() {
           </ul>
         </div>
       )}
-      <Workbench initialScenario={state} syncUrl />
+      <Workbench initialScenario={scenario} syncUrl />
     </>
   );
 }

@@ -6,9 +6,10 @@ import { Panel } from "@/components/ui/panel";
 import { expandPathDoc } from "@/lib/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import {
-  toScenarioFile,
+  fromScenario,
+  type OpenedScenario,
   type ScenarioFileJson,
-  type WorkbenchState,
+  toScenarioFile,
 } from "@/lib/workbench/scenario-state";
 import { encodeState, URL_STATE_KEY } from "@/lib/workbench/url-state";
 import { initModel, workbenchReducer } from "@/lib/workbench/workbench-reducer";
@@ -26,8 +27,11 @@ import { useSolverRuns } from "./use-solver-runs";
 import { useUrlSync } from "./use-url-sync";
 
 export interface WorkbenchProps {
-  /** The scenario to open (sandbox default, a saved revision, an imported file). */
-  initialScenario: WorkbenchState;
+  /**
+   * The scenario to open, validated (parseScenarioFile): the sandbox default, a link, a saved
+   * revision. Its top-level "workbench" field, if present, restores the path text and hidden sets.
+   */
+  initialScenario: OpenedScenario;
   readOnly?: boolean;
   /** Saving a revision; without it the save button asks to sign in. */
   onSave?: (file: ScenarioFileJson) => void | Promise<void>;
@@ -36,7 +40,9 @@ export interface WorkbenchProps {
 }
 
 export function Workbench({ initialScenario, readOnly, onSave, syncUrl }: WorkbenchProps) {
-  const [m, dispatch] = useReducer(workbenchReducer, initialScenario, (s) => initModel(s));
+  const [m, dispatch] = useReducer(workbenchReducer, initialScenario, (s) =>
+    initModel(fromScenario(s)),
+  );
   const [linkNote, setLinkNote] = useState("");
   const legs = useMemo(() => (m.doc.items.length ? expandPathDoc(m.doc) : null), [m.doc]);
   const store = useSolverRuns(m.entries, legs);

@@ -24,6 +24,9 @@ export interface WorkbenchFileExtras {
 
 export type ScenarioFileJson = Scenario & { workbench: WorkbenchFileExtras };
 
+/** A validated scenario as the workbench opens it, with the file's "workbench" field if any. */
+export type OpenedScenario = Scenario & { workbench?: unknown };
+
 export function toScenarioFile(state: WorkbenchState, doc: PathDoc): ScenarioFileJson {
   const legs = [];
   const generators: PlacedGenerator[] = [];
@@ -53,7 +56,7 @@ function sameLegs(a: unknown, b: unknown): boolean {
 }
 
 /** Workbench state of a validated scenario; `raw` is the file as read, for its "workbench" field. */
-export function fromScenario(scenario: Scenario, raw: unknown): WorkbenchState {
+export function fromScenario(scenario: Scenario, raw: unknown = scenario): WorkbenchState {
   const extras = (raw as { workbench?: Partial<WorkbenchFileExtras> } | null)?.workbench;
   const hidden = Array.isArray(extras?.hidden)
     ? extras.hidden.filter((h) => typeof h === "string")

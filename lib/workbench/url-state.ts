@@ -4,7 +4,7 @@
  */
 import LZString from "lz-string";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import { fromScenario, type ScenarioFileJson, type WorkbenchState } from "./scenario-state";
+import { type OpenedScenario, type ScenarioFileJson } from "./scenario-state";
 
 export const URL_STATE_KEY = "s";
 
@@ -12,7 +12,7 @@ export function encodeState(file: ScenarioFileJson): string {
   return LZString.compressToEncodedURIComponent(JSON.stringify(file));
 }
 
-export type DecodeResult = { ok: true; state: WorkbenchState } | { ok: false; errors: string[] };
+export type DecodeResult = { ok: true; scenario: OpenedScenario } | { ok: false; errors: string[] };
 
 export function decodeState(encoded: string): DecodeResult {
   const text = LZString.decompressFromEncodedURIComponent(encoded);
@@ -25,7 +25,8 @@ export function decodeState(encoded: string): DecodeResult {
   }
   const parsed = parseScenarioFile(json);
   if (!parsed.ok) return parsed;
-  return { ok: true, state: fromScenario(parsed.scenario, json) };
+  const extras = (json as { workbench?: unknown }).workbench;
+  return { ok: true, scenario: { ...parsed.scenario, workbench: extras } };
 }
 
 /** The encoded state from a location hash like "#s=…", or null. */

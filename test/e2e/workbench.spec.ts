@@ -174,6 +174,26 @@ describe("sandbox workbench", () => {
     }
   });
 
+  it("carries the scenario in the address: a new tab on the link draws the same curves", async () => {
+    const ours = curve(await traces(page, "stress-strain"), "B");
+    await page.waitForFunction(() => location.hash.startsWith("#s="));
+    const link = await page.evaluate(() => location.href);
+    const other = await context.newPage();
+    await other.goto(link);
+    await settled(other, 0);
+    expect(curve(await traces(other, "stress-strain"), "B").y).toEqual(ours.y);
+    await other.close();
+  });
+
+  it("saves a chart as SVG with a meaningful name", async () => {
+    const [download] = await Promise.all([
+      page.waitForEvent("download"),
+      page.getByRole("button", { name: /Save Stress–strain.* as SVG/ }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(/^craquelure-.*-stress-strain-.*\.svg$/);
+    expect(readFileSync((await download.path())!, "utf8")).toContain("<svg");
+  });
+
   it("shows where an imported file is wrong", async () => {
     await page.getByTestId("import-file").setInputFiles({
       name: "bad.json",

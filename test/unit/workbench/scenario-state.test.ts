@@ -76,7 +76,9 @@ describe("URL state", () => {
     const encoded = encodeState(toScenarioFile(state(text), doc(text)));
     expect(readHash(`#s=${encoded}`)).toBe(encoded);
     const back = decodeState(encoded);
-    expect(back.ok && back.state.pathText).toBe(text);
+    if (!back.ok) throw new Error(back.errors.join("; "));
+    expect(fromScenario(back.scenario).pathText).toBe(text);
+    expect(back.scenario.parameterSets.map((s) => s.id)).toEqual(["A", "B"]);
   });
 
   it("says what is wrong with a damaged or invalid link", () => {
