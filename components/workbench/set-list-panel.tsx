@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { useDrawVersion } from "@/components/charts/use-draw-version";
 import { PRESETS } from "@/lib/workbench/presets";
 import { MAX_SETS } from "@/lib/workbench/set-colors";
 import type { SetAction, SetEntry } from "@/lib/workbench/set-list";
@@ -38,6 +39,8 @@ export function SetListPanel({
   dispatch,
 }: SetListPanelProps) {
   const [preset, setPreset] = useState(PRESETS[0].key);
+  // Re-render with the run status (computing, increments, failure) as results arrive.
+  useDrawVersion(store);
   const full = entries.length >= MAX_SETS;
   return (
     <div>
