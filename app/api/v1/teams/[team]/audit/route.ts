@@ -1,0 +1,9 @@
+import { apiRoute } from "@/lib/api/route";
+import { listAuditLog } from "@/lib/workspace/audit-log";
+
+type Params = { team: string };
+
+/** team:read; ?page&pageSize → AuditLogResponse (newest first). */
+export const GET = apiRoute<Params>(({ db, actor, params, query }) =>
+  listAuditLog(db, actor, params.team, query),
+);

@@ -1,0 +1,11 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { apiRoute, Created } from "@/lib/api/route";
+import { importTeam } from "@/lib/workspace/import";
+
+type Params = { team: string };
+
+/** team:import (owners), into an empty team; body TeamExport → 201 TeamImportResponse. */
+export const POST = apiRoute<Params>(async ({ db, actor, params, request }) => {
+  const body = await readJsonBody(request, BODY_LIMITS.teamImport);
+  return new Created(await importTeam(db, actor, params.team, body));
+});

@@ -1,0 +1,69 @@
+import { asc, eq, inArray } from "drizzle-orm";
+
+import type { Executor } from "@/db/client";
+import { revisionComments } from "@/db/schema/comments";
+import { parameterSets } from "@/db/schema/parameter-sets";
+import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { users } from "@/db/schema/users";
+
+/** Every row a team export needs, in stable order. */
+export async function loadTeamContent(db: Executor, teamId: string) {
+  const scenarioRows = await db
+    .select()
+    .from(scenarios)
+    .where(eq(scenarios.teamId, teamId))
+    .orderBy(asc(scenarios.createdAt), asc(scenarios.id));
+  const ids = scenarioRows.map((s) => s.id);
+  const revisionRows = ids.length
+    ? await db
+        .select()
+        .from(scenarioRevisions)
+        .where(inArray(scenarioRevisions.scenarioId, ids))
+        .orderBy(asc(scenarioRevisions.number))
+    : [];
+  const revisionIds = revisionRows.map((r) => r.id);
+  const [eventRows, commentRows, setRows] = await Promise.all([
+    revisionIds.length
+      ? db
+          .select()
+          .from(reviewEvents)
+          .where(inArray(reviewEvents.revisionId, revisionIds))
+          .orderBy(asc(reviewEvents.at), asc(reviewEvents.id))
+      : [],
+    revisionIds.length
+      ? db
+          .select()
+          .from(revisionComments)
+          .where(inArray(revisionComments.revisionId, revisionIds))
+          .orderBy(asc(revisionComments.createdAt), asc(revisionComments.id))
+      : [],
+    db
+      .select()
+      .from(parameterSets)
+      .where(eq(parameterSets.teamId, teamId))
+      .orderBy(asc(parameterSets.name)),
+  ]);
+  return { scenarioRows, revisionRows, eventRows, commentRows, setRows };
+}
+
+/** E-mail and name of the given users, for turning author ids into portable people. */
+export async function loadPeople(db: Executor, ids: string[]) {
+  const unique = [...new Set(ids)];
+  if (unique.length === 0) return new Map<string, { email: string; name: string }>();
+  const rows = await db
+    .select({ id: users.id, email: users.email, name: users.name })
+    .from(users)
+    .where(inArray(users.id, unique));
+  return new Map(rows.map((r) => [r.id, { email: r.email, name: r.name }]));
+}
+
+/** User ids for the given e-mail addresses (those that have an account here). */
+export async function findUsersByEmail(db: Executor, emails: string[]) {
+  const unique = [...new Set(emails.map((e) => e.toLowerCase()))];
+  if (unique.length === 0) return new Map<string, string>();
+  const rows = await db
+    .select({ id: users.id, email: users.email })
+    .from(users)
+    .where(inArray(users.email, unique));
+  return new Map(rows.map((r) => [r.email, r.id]));
+}
