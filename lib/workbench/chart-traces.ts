@@ -33,8 +33,6 @@ export interface ChartTrace {
   hovertemplate: string;
 }
 
-const fmt = (unit: string) => (unit ? ` ${unit}` : "");
-
 /** Row indices behind each trace's points, for mapping a click back to a step. */
 export interface BuiltChart {
   traces: ChartTrace[];
@@ -67,7 +65,7 @@ export function buildChart(
         showlegend: k === 0 || def.series.length > 1,
         meta: { set: src.id, series: s.key },
         line: { color: src.color, dash: s.dash, width: 1.8 },
-        hovertemplate: `${s.name}<br>x = %{x:.5g}${fmt(def.xUnit)}<br>y = %{y:.5g}${fmt(def.yUnit)}<extra>${tag}</extra>`,
+        hovertemplate: `${s.name}<br>${def.xTitle}: %{x:.5g}<br>${def.yTitle}: %{y:.5g}<extra>${tag}</extra>`,
       });
     });
     const s0 = def.series[0];
@@ -111,7 +109,7 @@ export function buildChart(
         line: { width: 2, color: src.color },
       },
       text: extra.names,
-      hovertemplate: `%{text}<br>x = %{x:.5g}${fmt(def.xUnit)}<br>y = %{y:.5g}${fmt(def.yUnit)}<extra>${tag}</extra>`,
+      hovertemplate: `%{text}<br>${def.xTitle}: %{x:.5g}<br>${def.yTitle}: %{y:.5g}<extra>${tag}</extra>`,
     });
   }
   return { traces, rowsOf };
