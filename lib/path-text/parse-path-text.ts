@@ -155,6 +155,14 @@ export function parsePathText(text: string): ParsePathResult {
           throw new LineError(tokens[1].column, `unexpected "${tokens[1].text}" after "end"`);
         if (open.item.block.legs.length === 0)
           throw new LineError(head.column, `the repeat block of line ${open.line} has no legs`);
+        const { count, grow, legs } = open.item.block;
+        const last = 1 + grow * (count - 1);
+        if (!legs.every((l) => l.target.every((v) => Number.isFinite(v * last))))
+          errors.push({
+            line: open.line,
+            column: 1,
+            message: `"grow ${grow}" makes the targets of the last cycle too large to compute`,
+          });
         items.push(open.item);
         open = null;
       } else {

@@ -64,6 +64,8 @@ describe("path notation", () => {
     ["repeat 2\nend", 2, 1, "has no legs"],
     ["# only a note\n", 1, 1, "empty"],
     ["e11=0.01 in 1000000\ne11=0 in 5", 1, 1, "limit"],
+    ["e11=1e400 in 5", 1, 5, "not a finite number"],
+    ["repeat 3 grow 1e308\n  e11=10 in 1\nend", 1, 1, "too large"],
   ])("reports %j at line %i, column %i", (text, line, column, message) => {
     const e = firstError(text);
     expect(e.line).toBe(line);
