@@ -19,6 +19,11 @@ export SMTP_HOST=127.0.0.1 SMTP_PORT
 export MAIL_FROM=${MAIL_FROM:-"Craquelure <no-reply@craquelure.local>"}
 export MAIL_OUTBOX_DIR=$DATA_DIR/outbox
 
+# Refuse early when the port is taken: otherwise the health check would greet someone else's server.
+if node -e "require('net').connect(+process.argv[1],'127.0.0.1').on('connect',()=>process.exit(0)).on('error',()=>process.exit(1))" "$PORT"; then
+  die "port $PORT is already in use; stop that program or choose another port: PORT=3100 scripts/start.sh"
+fi
+
 ensure_node_modules
 ensure_postgres_installed
 
@@ -40,7 +45,7 @@ npm run --silent db:migrate
 npm run --silent db:seed
 
 mkdir -p "$MAIL_OUTBOX_DIR"
-npx tsx scripts/fake-smtp.ts &
+node --import tsx scripts/fake-smtp.ts &
 children+=($!)
 wait_for_port "$SMTP_PORT" 20 || die "fake mail server did not start"
 
@@ -50,7 +55,7 @@ if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib workers db public 
   npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log" >&2; die "build failed (see .data/build.log)"; }
 fi
 
-npx next start -H 127.0.0.1 -p "$PORT" &
+node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" &
 children+=($!)
 wait_for_http "http://127.0.0.1:$PORT/" 60 || die "the app did not answer on port $PORT"
 log "Craquelure is running at http://127.0.0.1:$PORT  (mail outbox: http://127.0.0.1:$PORT/dev/outbox)"

@@ -82,7 +82,7 @@ if want integration || want e2e; then
   export APP_URL=http://127.0.0.1:$APP_PORT
   mkdir -p "$MAIL_OUTBOX_DIR"
   count_check "migrations apply" npm run --silent db:migrate
-  npx tsx scripts/fake-smtp.ts >"$RUN_DIR/smtp.log" 2>&1 &
+  node --import tsx scripts/fake-smtp.ts >"$RUN_DIR/smtp.log" 2>&1 &
   children+=($!)
   wait_for_port "$SMTP_PORT" 20 || log "fake mail server did not start"
 fi
@@ -97,7 +97,7 @@ if want e2e; then
   if NODE_ENV=production npx next build >"$RUN_DIR/build.log" 2>&1; then
     passed=$((passed + 1))
     npm run --silent db:seed >/dev/null
-    NODE_ENV=production npx next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+    NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
     children+=($!)
     if wait_for_http "http://127.0.0.1:$APP_PORT/" 60; then
       E2E_BASE_URL=http://127.0.0.1:$APP_PORT run_vitest e2e vitest.e2e.config.ts
