@@ -104,7 +104,7 @@ export function ResultsTable({ store, entries }: ResultsTableProps) {
         <div style={{ width: COL_W * RESULT_COLUMNS.length }}>
           <div
             role="row"
-            className="sticky top-0 z-10 flex border-b border-glaze-line bg-glaze-deep"
+            className="sticky top-0 z-20 flex border-b border-glaze-line bg-glaze-deep shadow-sm"
           >
             {RESULT_COLUMNS.map((c) => (
               <div
@@ -117,7 +117,7 @@ export function ResultsTable({ store, entries }: ResultsTableProps) {
               </div>
             ))}
           </div>
-          <div style={{ height: virt.getTotalSize(), position: "relative" }}>
+          <div className="relative z-0" style={{ height: virt.getTotalSize() }}>
             {virt.getVirtualItems().map((v) => (
               <div
                 key={v.index}
@@ -131,7 +131,7 @@ export function ResultsTable({ store, entries }: ResultsTableProps) {
                       : { from: v.index, to: v.index },
                   )
                 }
-                className="absolute left-0 flex cursor-pointer hover:bg-glaze-deep/60 aria-selected:bg-verdigris-light"
+                className="absolute left-0 flex cursor-pointer select-none hover:bg-glaze-deep/60 aria-selected:bg-verdigris-light"
                 style={{ top: v.start, height: ROW_H }}
               >
                 {RESULT_COLUMNS.map((c) => (
