@@ -1,4 +1,4 @@
-import { and, arrayContains, asc, count, desc, eq, ilike, type SQL } from "drizzle-orm";
+import { and, arrayContains, asc, count, desc, eq, ilike, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 
 import type { Executor } from "@/db/client";
@@ -78,7 +78,7 @@ export async function listScenariosForTeam(db: Executor, teamId: string, q: Scen
   const dir = (q.dir ?? (q.sort === "updated" ? "desc" : "asc")) === "asc" ? asc : desc;
   const order =
     q.sort === "name"
-      ? [dir(scenarios.name), asc(scenarios.id)]
+      ? [dir(sql`lower(${scenarios.name})`), dir(scenarios.name), asc(scenarios.id)]
       : q.sort === "review"
         ? [dir(latest.reviewState), desc(scenarios.updatedAt), asc(scenarios.id)]
         : [dir(scenarios.updatedAt), dir(scenarios.id)];

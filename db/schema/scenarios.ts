@@ -1,3 +1,4 @@
+import { sql } from "drizzle-orm";
 import {
   bigserial,
   index,
@@ -40,7 +41,8 @@ export const scenarios = pgTable(
   },
   (t) => [
     index("scenarios_team_updated_idx").on(t.teamId, t.updatedAt),
-    index("scenarios_team_name_idx").on(t.teamId, t.name),
+    // Names sort the way people read them (alpha, Bravo, charlie), not by byte value.
+    index("scenarios_team_lower_name_idx").on(t.teamId, sql`lower(${t.name})`),
     index("scenarios_tags_idx").using("gin", t.tags),
   ],
 );
