@@ -14,8 +14,21 @@ const AXIS = {
 };
 
 /** Our own plain chart look: white plot on the glaze page, legend beneath. */
-export function chartLayout(def: ChartDef) {
+export function chartLayout(def: ChartDef, empty = false) {
   return {
+    annotations: empty
+      ? [
+          {
+            text: "no results to show yet",
+            showarrow: false,
+            xref: "paper" as const,
+            yref: "paper" as const,
+            x: 0.5,
+            y: 0.5,
+            font: { ...FONT, size: 12, color: "#6b7a82" },
+          },
+        ]
+      : [],
     font: FONT,
     margin: { l: 56, r: 12, t: 8, b: 40 },
     paper_bgcolor: "rgba(0,0,0,0)",
@@ -24,8 +37,8 @@ export function chartLayout(def: ChartDef) {
     hoverlabel: { font: { ...FONT, color: "#ffffff" } },
     showlegend: true,
     legend: { orientation: "h" as const, y: -0.22, font: { ...FONT, size: 10 } },
-    xaxis: { ...AXIS, title: { text: def.xTitle, standoff: 4 } },
-    yaxis: { ...AXIS, title: { text: def.yTitle, standoff: 4 } },
+    xaxis: { ...AXIS, title: { text: def.xTitle, standoff: 4 }, visible: !empty },
+    yaxis: { ...AXIS, title: { text: def.yTitle, standoff: 4 }, visible: !empty },
     // keep zoom while the data grows
     uirevision: def.key,
   };

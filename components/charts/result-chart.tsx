@@ -55,7 +55,8 @@ export function ResultChart({
       complete: store.settled,
     };
   }, [def, look, cursor, version, store]);
-  const layout = useMemo(() => chartLayout(def), [def]);
+  const empty = built.traces.length === 0;
+  const layout = useMemo(() => chartLayout(def, empty), [def, empty]);
 
   const drawn = (_fig: unknown, gd: HTMLElement) => {
     graph.current = gd;

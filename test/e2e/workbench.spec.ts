@@ -222,4 +222,27 @@ describe("sandbox workbench", () => {
     await box.fill("e11=1% in 100\ns11=0 in 50");
     await settled(page, n);
   });
+
+  it("turns a solver failure into a message, and the next edit computes again", async () => {
+    const other = await context.newPage();
+    // A solver script that dies on load, as a broken worker would (the bundler names every
+    // worker script after "worker"; the sandbox has no other worker).
+    const workerScript = (url: URL) => /worker/i.test(url.pathname);
+    await other.route(workerScript, (route) =>
+      route.fulfill({ contentType: "text/javascript", body: "throw new Error('solver failed');" }),
+    );
+    await other.goto("/sandbox");
+    await expect
+      .poll(() => other.getByTestId("run-notes").textContent(), { timeout: 30_000 })
+      .toContain("The solver stopped unexpectedly");
+    await screenshot(other, "workbench-solver-error");
+    expect(await other.content()).not.toMatch(/at .*\.(js|ts):\d+/);
+    await other.unroute(workerScript);
+    const n = await eventCount(other);
+    await other.locator("#param-A-Y0_1").fill("0.06");
+    await settled(other, n);
+    expect(curve(await traces(other, "stress-strain"), "A").x.length).toBeGreaterThan(100);
+    await expect.poll(() => other.getByTestId("run-notes").count()).toBe(0);
+    await other.close();
+  });
 });
