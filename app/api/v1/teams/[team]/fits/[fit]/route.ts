@@ -1,0 +1,9 @@
+import { apiRoute } from "@/lib/api/route";
+import { getFit } from "@/lib/records/fits";
+
+type Params = { team: string; fit: string };
+
+/** team:read → FitResponse (the fit and the computed curve over each test curve). */
+export const GET = apiRoute<Params>(({ db, actor, params }) =>
+  getFit(db, actor, params.team, params.fit),
+);

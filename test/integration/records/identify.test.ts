@@ -1,0 +1,92 @@
+import { beforeAll, describe, expect, it } from "vitest";
+
+import { findParameterSetView } from "@/db/queries/parameter-sets";
+import { DEMO_PARAMS, demoCyclicTension } from "@/lib/calibration/demo-curves";
+import { getFit } from "@/lib/records/fits";
+import { identifyRecords } from "@/lib/records/identify-records";
+import { saveFit } from "@/lib/records/save-fit";
+import { uploadTestRecord } from "@/lib/records/upload";
+
+import { openTestDb, unique } from "../support/db";
+import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";
+import { uploadBody } from "./support";
+
+const db = openTestDb();
+let t: TeamFixture;
+let recordId: string;
+
+/** 7 cycles × 2 legs × 143 increments + 1 ≈ 2,000 points, invented, with light noise. */
+function csv2000(): string {
+  const p = demoCyclicTension(DEMO_PARAMS, { increments: 143, noiseStress: 0.05, seed: 7 });
+  const rows = ["strain,stress [MPa]"];
+  for (let i = 0; i < p.strain.length; i++) rows.push(`${p.strain[i]},${p.stress[i]}`);
+  return rows.join("\n");
+}
+
+beforeAll(async () => {
+  t = await makeTeamWithAllRoles(db);
+  const text = csv2000();
+  const up = await uploadTestRecord(db, t.members.editor, t.slug, {
+    ...uploadBody(text),
+    mapping: { strain: 0, stress: 1 },
+  });
+  expect(up.pointCount).toBeGreaterThanOrEqual(2000);
+  recordId = up.id;
+});
+
+describe("identification on a 2,000-point record through the service", () => {
+  it("finds the loops and the generating values", async () => {
+    const result = await identifyRecords(db, t.members.editor, t.slug, { recordIds: [recordId] });
+    const report = result.records[0];
+    expect(report.loops.length).toBeGreaterThanOrEqual(6);
+    expect(result.params.E1).toBeGreaterThan(DEMO_PARAMS.E1 * 0.97);
+    expect(result.params.E1).toBeLessThan(DEMO_PARAMS.E1 * 1.03);
+    expect(Math.abs(result.params.a1 / DEMO_PARAMS.a1 - 1)).toBeLessThan(0.1);
+    expect(Math.abs(result.params.alpha / DEMO_PARAMS.alpha - 1)).toBeLessThan(0.1);
+    expect(result.identified).toEqual(expect.arrayContaining(["E1", "Y0_1", "a1", "alpha"]));
+    expect(result.recordNames[recordId]).toBe("demo-cyclic-tension");
+  });
+
+  it("saves a fit and a parameter set whose provenance names record, method and residual", async () => {
+    const name = unique("Fitted set");
+    const saved = await saveFit(db, t.members.editor, t.slug, {
+      method: "identify",
+      recordIds: [recordId],
+      name,
+    });
+    const set = await findParameterSetView(db, t.teamId, saved.parameterSetId);
+    expect(set?.name).toBe(name);
+    expect(set?.provenance.kind).toBe("fitted");
+    expect(set?.provenance.records?.[0]).toContain(recordId);
+    expect(set?.provenance.method).toMatch(/spec E/);
+    const rms = Object.values(set?.provenance.residuals ?? {})[0];
+    // The residual is the library's own replay validation of the identified set (spec E.11).
+    const identified = await identifyRecords(db, t.members.editor, t.slug, {
+      recordIds: [recordId],
+    });
+    expect(rms).toBeCloseTo(identified.records[0].validation!.rms, 9);
+    const { fit, overlay } = await getFit(db, t.members.viewer, t.slug, saved.id);
+    expect(fit.parameterSetName).toBe(name);
+    expect(overlay[0].computed?.y.length).toBe(overlay[0].measured.y.length);
+  });
+
+  it("a refined set is replayed on the server for its residuals; a duplicate name saves nothing", async () => {
+    const name = unique("Refined");
+    const params = { ...DEMO_PARAMS, E1: 11100, label: "x" };
+    const first = await saveFit(db, t.members.owner, t.slug, {
+      method: "refine",
+      recordIds: [recordId],
+      name,
+      params,
+      free: ["E1"],
+    });
+    expect(first.residuals[0].rms).toBeGreaterThan(0);
+    const again = await saveFit(db, t.members.owner, t.slug, {
+      method: "refine",
+      recordIds: [recordId],
+      name,
+      params,
+    }).catch((e: { code: string }) => e);
+    expect(again).toMatchObject({ code: "conflict:name" });
+  });
+});
