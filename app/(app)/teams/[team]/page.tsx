@@ -30,8 +30,14 @@ export default async function TeamHomePage({ params }: { params: Promise<{ team:
         </Card>
         <Card title="Test records" id="test-records">
           <p className="text-sm text-ink-soft">
-            No test records yet. Uploaded coupon curves will appear here.
+            Uploaded coupon curves and the fits made from them.
           </p>
+          <Link
+            href={`/teams/${ctx.team.slug}/tests`}
+            className="mt-3 inline-block text-sm text-verdigris-dark hover:underline"
+          >
+            Test records
+          </Link>
         </Card>
         <Card title="Members" id="members">
           <ul className="space-y-1 text-sm">

@@ -28,6 +28,12 @@ export function TeamNav({ slug, name, role }: { slug: string; name: string; role
         <Link href={`/teams/${slug}/members`} className="text-verdigris-dark hover:underline">
           Members
         </Link>
+        <Link href={`/teams/${slug}/tests`} className="text-verdigris-dark hover:underline">
+          Test records
+        </Link>
+        <Link href={`/teams/${slug}/fits`} className="text-verdigris-dark hover:underline">
+          Fits
+        </Link>
         {can(role, "team:rename") ? (
           <Link href={`/teams/${slug}/settings`} className="text-verdigris-dark hover:underline">
             Settings

@@ -1,0 +1,51 @@
+"use client";
+
+import { Plot } from "@/components/charts/plot";
+
+export interface CurveTrace {
+  name: string;
+  x: number[];
+  y: number[];
+  dash?: boolean;
+}
+
+/** Stress against strain, one or more curves (measured solid, computed dashed). */
+export function CurveChart({
+  traces,
+  xTitle = "strain (mm/mm)",
+  yTitle = "stress (MPa)",
+  height = 320,
+  testId,
+}: {
+  traces: CurveTrace[];
+  xTitle?: string;
+  yTitle?: string;
+  height?: number;
+  testId?: string;
+}) {
+  return (
+    <div data-testid={testId} style={{ height }}>
+      <Plot
+        data={traces.map((t) => ({
+          type: "scatter",
+          mode: "lines",
+          name: t.name,
+          x: t.x,
+          y: t.y,
+          line: t.dash ? { dash: "dash", width: 2 } : { width: 1.5 },
+        }))}
+        layout={{
+          autosize: true,
+          margin: { l: 60, r: 10, t: 10, b: 45 },
+          xaxis: { title: { text: xTitle } },
+          yaxis: { title: { text: yTitle } },
+          legend: { orientation: "h", y: -0.25 },
+          paper_bgcolor: "rgba(0,0,0,0)",
+        }}
+        config={{ displaylogo: false, responsive: true }}
+        style={{ width: "100%", height: "100%" }}
+        useResizeHandler
+      />
+    </div>
+  );
+}
