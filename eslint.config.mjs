@@ -8,6 +8,7 @@ const config = [
     ignores: [
       ".next/**",
       ".next-test/**",
+      ".next-bench/**",
       "node_modules/**",
       ".data/**",
       ".test-data/**",

@@ -1,6 +1,6 @@
 /**
  * Speed of the workbench in headless Chromium (npm run bench:ui; not a test).
- * Starts the production build on its own port (builds it first with --build or when missing),
+ * Starts the production build on its own port (builds it first into .next-bench; --reuse keeps an existing one),
  * opens /sandbox on a 20,000-increment path, then times parameter edits from the input event:
  *   firstPaint  first chart redrawn with rows of the new run
  *   full        every chart drawn with the complete result
@@ -98,10 +98,15 @@ async function measureEdit(page: Page, value: string): Promise<Sample> {
   );
 }
 
+const BENCH_DIST_DIR = ".next-bench";
+
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 async function main() {
-  if (process.argv.includes("--build") || !existsSync(".next/BUILD_ID")) {
+  // Its own build folder (next.config.ts reads CRAQUELURE_DIST_DIR): never times a stale build,
+  // never replaces the one scripts/start.sh serves. --reuse skips the build when one exists.
+  process.env.CRAQUELURE_DIST_DIR = BENCH_DIST_DIR;
+  if (!process.argv.includes("--reuse") || !existsSync(`${BENCH_DIST_DIR}/BUILD_ID`)) {
     console.log("bench:ui: building (next build)…");
     execSync("npx next build", {
       stdio: "inherit",
@@ -118,8 +123,8 @@ async function main() {
       `port ${PORT} is taken (an old server would serve a stale build); set BENCH_PORT`,
     );
   const server: ChildProcess = spawn(
-    "npx",
-    ["next", "start", "-H", "127.0.0.1", "-p", String(PORT)],
+    "node_modules/.bin/next",
+    ["start", "-H", "127.0.0.1", "-p", String(PORT)],
     {
       stdio: "ignore",
       env: { ...process.env, NODE_ENV: "production" },
