@@ -26,7 +26,7 @@ const summaryColumns = {
   latestRevision: scenarios.latestRevision,
   latestAuthor: personRef(revAuthor.id, revAuthor.name),
   latestSavedAt: latest.createdAt,
-  reviewState: latest.reviewState,
+  reviewState: scenarios.latestReviewState,
 };
 
 function summaryQuery(db: Executor) {
@@ -57,7 +57,7 @@ export function toScenarioSummary(row: SummaryRow) {
       number: row.latestRevision,
       author: row.latestAuthor,
       savedAt: row.latestSavedAt?.toISOString() ?? null,
-      reviewState: row.reviewState ?? "draft",
+      reviewState: row.reviewState,
     },
   };
 }
@@ -72,7 +72,7 @@ export async function listScenariosForTeam(db: Executor, teamId: string, q: Scen
   if (q.tag) conditions.push(arrayContains(scenarios.tags, [q.tag]));
   if (q.author) conditions.push(eq(scenarios.createdBy, q.author));
   if (q.q) conditions.push(ilike(scenarios.name, `%${escapeLike(q.q)}%`));
-  if (q.review) conditions.push(eq(latest.reviewState, q.review));
+  if (q.review) conditions.push(eq(scenarios.latestReviewState, q.review));
   const where = and(...conditions);
 
   const dir = (q.dir ?? (q.sort === "updated" ? "desc" : "asc")) === "asc" ? asc : desc;
@@ -80,23 +80,23 @@ export async function listScenariosForTeam(db: Executor, teamId: string, q: Scen
     q.sort === "name"
       ? [dir(sql`lower(${scenarios.name})`), dir(scenarios.name), asc(scenarios.id)]
       : q.sort === "review"
-        ? [dir(latest.reviewState), desc(scenarios.updatedAt), asc(scenarios.id)]
+        ? [dir(scenarios.latestReviewState), desc(scenarios.updatedAt), asc(scenarios.id)]
         : [dir(scenarios.updatedAt), dir(scenarios.id)];
 
-  const countQuery = db.select({ n: count() }).from(scenarios);
-  const counted = q.review
-    ? countQuery.innerJoin(
-        latest,
-        and(eq(latest.scenarioId, scenarios.id), eq(latest.number, scenarios.latestRevision)),
-      )
-    : countQuery;
+  // The page's ids first (an index walk on scenarios alone), then details for those rows only.
+  const pageIds = db
+    .select({ id: scenarios.id })
+    .from(scenarios)
+    .where(where)
+    .orderBy(...order)
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize)
+    .as("page_ids");
   const [rows, [total]] = await Promise.all([
     summaryQuery(db)
-      .where(where)
-      .orderBy(...order)
-      .limit(q.pageSize)
-      .offset((q.page - 1) * q.pageSize),
-    counted.where(where),
+      .innerJoin(pageIds, eq(pageIds.id, scenarios.id))
+      .orderBy(...order),
+    db.select({ n: count() }).from(scenarios).where(where),
   ]);
   return { items: rows.map(toScenarioSummary), total: total.n, page: q.page, pageSize: q.pageSize };
 }

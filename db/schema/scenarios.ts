@@ -36,6 +36,9 @@ export const scenarios = pgTable(
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     // The number of the newest revision; the save transaction locks this row and bumps it.
     latestRevision: integer("latest_revision").notNull().default(0),
+    // Copy of the newest revision's review state, kept in step by the save and review
+    // transactions, so the list can filter and sort by it without reading 100k revisions.
+    latestReviewState: reviewState("latest_review_state").notNull().default("draft"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -44,6 +47,7 @@ export const scenarios = pgTable(
     // Names sort the way people read them (alpha, Bravo, charlie), not by byte value.
     index("scenarios_team_lower_name_idx").on(t.teamId, sql`lower(${t.name})`),
     index("scenarios_tags_idx").using("gin", t.tags),
+    index("scenarios_team_review_idx").on(t.teamId, t.latestReviewState, t.updatedAt),
   ],
 );
 

@@ -33,7 +33,10 @@ export async function readJsonBody(
   const chunks: Uint8Array[] = [];
   let size = 0;
   for (;;) {
-    const { done, value } = await reader.read();
+    // A client that hangs up mid-body is a bad request, not a server fault.
+    const { done, value } = await reader.read().catch(() => {
+      throw new AppError("invalid:body", "The request body could not be read.");
+    });
     if (done) break;
     size += value.byteLength;
     if (size > limit) {

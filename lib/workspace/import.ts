@@ -92,6 +92,7 @@ export async function importTeam(
   for (const s of doc.scenarios) {
     const scenarioId = randomUUID();
     const latest = Math.max(...s.revisions.map((r) => r.number));
+    const newest = s.revisions.find((r) => r.number === latest)!;
     scenarioRows.push({
       id: scenarioId,
       teamId: ctx.team.id,
@@ -100,6 +101,7 @@ export async function importTeam(
       tags: s.tags,
       createdBy: idOf(s.createdBy),
       latestRevision: latest,
+      latestReviewState: newest.review.state,
       createdAt: at(s.createdAt),
       updatedAt: at(s.updatedAt),
     });

@@ -7,7 +7,12 @@ import {
   type ReviewEventView,
   type RevisionMeta,
 } from "@/db/queries/revisions";
-import { reviewEvents, scenarioRevisions, type ReviewState } from "@/db/schema/scenarios";
+import {
+  reviewEvents,
+  scenarioRevisions,
+  scenarios,
+  type ReviewState,
+} from "@/db/schema/scenarios";
 import type { Actor } from "@/lib/accounts/actor";
 import { recordAudit } from "@/lib/audit";
 import { can, type Capability } from "@/lib/auth/permissions";
@@ -104,6 +109,12 @@ export async function changeReview(
       .returning({ id: scenarioRevisions.id });
     // Someone else moved it between our read and this write.
     if (moved.length === 0) throw refused;
+    // The list shows the newest revision's state; a concurrent save of a newer revision
+    // makes this condition false, and the new revision's "draft" stands.
+    await tx
+      .update(scenarios)
+      .set({ latestReviewState: step.to })
+      .where(and(eq(scenarios.id, scenario.id), eq(scenarios.latestRevision, revision.number)));
     const [lastRequest] = await tx
       .select({ actorId: reviewEvents.actorId })
       .from(reviewEvents)

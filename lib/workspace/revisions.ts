@@ -105,7 +105,7 @@ export async function saveRevision(
       });
       await tx
         .update(scenarios)
-        .set({ latestRevision: number, updatedAt: now })
+        .set({ latestRevision: number, latestReviewState: "draft", updatedAt: now })
         .where(eq(scenarios.id, row.id));
       await recordAudit(tx, {
         actorId: ctx.actor.id,

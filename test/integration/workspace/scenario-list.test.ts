@@ -80,4 +80,27 @@ describe("the scenarios list", () => {
     expect(charlie.createdBy).toEqual({ id: editor.id, name: "editor" });
     expect(charlie.materialLabel).toBe("PP-GF20");
   });
+
+  it("shows the newest revision's review state: a verdict on an older revision does not move it", async () => {
+    const w = await makeWorld(db);
+    const { editor, reviewer } = w.members;
+    const mail = recordingMailer();
+    const state = async () =>
+      (await listScenarios(db, editor, w.slug, {})).items[0].latestRevision.reviewState;
+    await changeReview(db, editor, w.slug, w.scenarioId, 1, { action: "request" }, mail);
+    expect(await state()).toBe("in_review");
+    await saveRevision(db, editor, w.slug, w.scenarioId, {
+      baseRevision: 1,
+      file: demoFileWith(12000),
+    });
+    expect(await state()).toBe("draft");
+    await changeReview(db, reviewer, w.slug, w.scenarioId, 1, { action: "approve" }, mail);
+    expect(await state()).toBe("draft");
+    await changeReview(db, editor, w.slug, w.scenarioId, 2, { action: "request" }, mail);
+    await changeReview(db, reviewer, w.slug, w.scenarioId, 2, { action: "request-changes" }, mail);
+    expect(await state()).toBe("changes_requested");
+    expect((await listScenarios(db, editor, w.slug, { review: "changes_requested" })).total).toBe(
+      1,
+    );
+  });
 });

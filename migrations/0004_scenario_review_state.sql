@@ -1,0 +1,2 @@
+ALTER TABLE "scenarios" ADD COLUMN "latest_review_state" "review_state" DEFAULT 'draft' NOT NULL;--> statement-breakpoint
+CREATE INDEX "scenarios_team_review_idx" ON "scenarios" USING btree ("team_id","latest_review_state","updated_at");
