@@ -1,0 +1,42 @@
+#!/usr/bin/env bash
+# npm run bench:api — the workspace API under load, on its own throwaway PostgreSQL cluster and
+# its own production build (.next-bench), so it never touches .data/ or a running app.
+# Stops everything it started, also on Ctrl-C. Last line: bench:api: list_p95=… save_p95=… rps=… errors=…
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/lib/common.sh
+
+export NEXT_TELEMETRY_DISABLED=1 NODE_ENV=production
+export CRAQUELURE_DIST_DIR=.next-bench
+RUN_DIR=$(pwd)/.test-data/bench-api-$$
+PGPORT=${BENCH_PG_PORT:-$((56000 + $$ % 900))}
+export BENCH_APP_PORT=${BENCH_APP_PORT:-$((33000 + $$ % 900))}
+export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_bench
+export APP_URL=http://127.0.0.1:$BENCH_APP_PORT
+# Review mails are not part of this benchmark; point SMTP at a closed port on loopback.
+export SMTP_HOST=127.0.0.1 SMTP_PORT=9
+
+cleanup() {
+  trap - INT TERM EXIT
+  [ -n "${PGBIN:-}" ] && pg_cluster_stop "$RUN_DIR/pg"
+  rm -rf "$RUN_DIR"
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+ensure_postgres_installed
+mkdir -p "$RUN_DIR"
+# Production-like durability (fsync on); more memory than the tiny default for 100k revisions.
+pg_cluster_start "$RUN_DIR/pg" "$PGPORT" "-c shared_buffers=256MB -c max_connections=100"
+pg_create_db "$PGPORT" craquelure_bench
+npm run --silent db:migrate
+
+# Reuse the bench build when no source changed since it was made.
+if [ ! -f .next-bench/BUILD_ID ] || [ -n "$(find app components lib workers db public next.config.ts package-lock.json -newer .next-bench/BUILD_ID -print -quit 2>/dev/null)" ]; then
+  log "building the app into .next-bench (about a minute)"
+  npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; die "build failed"; }
+fi
+
+# The load script seeds, starts `next start` as its own child and stops it before it returns.
+npx tsx scripts/bench-api.ts

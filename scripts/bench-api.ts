@@ -1,0 +1,181 @@
+/**
+ * Load test of the workspace API (run through scripts/bench-api.sh, which provides the
+ * database and the build). Seeds 10,000 scenarios / 100,000 revisions, starts `next start`,
+ * then measures with autocannon at 50 connections: the scenarios list route and saving a revision.
+ */
+import { spawn, type ChildProcess } from "node:child_process";
+import { readFileSync } from "node:fs";
+import path from "node:path";
+
+import autocannon from "autocannon";
+
+import { createDb, requireDatabaseUrl } from "@/db/client";
+import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
+
+import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";
+
+const PORT = Number(process.env.BENCH_APP_PORT ?? 33000);
+const BASE = `http://127.0.0.1:${PORT}`;
+const CONNECTIONS = 50;
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
+
+interface Phase {
+  name: string;
+  requests: number;
+  rps: number;
+  p50: number;
+  p95: number;
+  p99: number;
+  errors: number;
+  statuses: Record<number, number>;
+}
+
+const percentile = (sorted: number[], p: number) =>
+  sorted.length
+    ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]
+    : NaN;
+
+/** autocannon has no p95 of its own: every response time is kept and ranked here. */
+async function measure(name: string, options: autocannon.Options): Promise<Phase> {
+  const times: number[] = [];
+  const statuses: Record<number, number> = {};
+  const result = await new Promise<autocannon.Result>((resolve, reject) => {
+    const instance = autocannon(options, (error, done) => (error ? reject(error) : resolve(done)));
+    instance.on("response", (_client, status, _bytes, ms) => {
+      times.push(ms);
+      statuses[status] = (statuses[status] ?? 0) + 1;
+    });
+  });
+  times.sort((a, b) => a - b);
+  const bad = Object.entries(statuses).reduce((n, [s, c]) => n + (Number(s) >= 400 ? c : 0), 0);
+  return {
+    name,
+    requests: times.length,
+    rps: Math.round(times.length / (result.duration || SECONDS)),
+    p50: percentile(times, 50),
+    p95: percentile(times, 95),
+    p99: percentile(times, 99),
+    errors: bad + result.errors + result.timeouts,
+    statuses,
+  };
+}
+
+function startApp(): ChildProcess {
+  const nextBin = path.join(process.cwd(), "node_modules/next/dist/bin/next");
+  // Own process group, so the whole server goes when we stop it.
+  return spawn(process.execPath, [nextBin, "start", "-H", "127.0.0.1", "-p", String(PORT)], {
+    stdio: ["ignore", "ignore", "inherit"],
+    detached: true,
+    env: process.env,
+  });
+}
+
+async function waitForApp(url: string, cookie: string) {
+  for (let i = 0; i < 300; i++) {
+    try {
+      if ((await fetch(url, { headers: { cookie } })).ok) return;
+    } catch {}
+    await new Promise((resolve) => setTimeout(resolve, 200));
+  }
+  throw new Error("the app did not answer within 60 s");
+}
+
+async function main() {
+  const { db, close } = createDb(requireDatabaseUrl(), { max: 2 });
+  let app: ChildProcess | undefined;
+  const stopApp = () => {
+    if (app?.pid && app.exitCode === null) {
+      try {
+        process.kill(-app.pid, "SIGTERM");
+      } catch {}
+    }
+  };
+  process.on("exit", stopApp);
+  try {
+    let t = Date.now();
+    const seed = await seedBench(db);
+    const ids = await benchScenarioIds(db, seed.teamSlug);
+    console.log(
+      `seeded ${ids.length} scenarios × ${REVISIONS_PER_SCENARIO} revisions in ${((Date.now() - t) / 1000).toFixed(1)} s`,
+    );
+    // The cookie a sign-in would set: a lucia session for the bench editor.
+    const session = await createLucia(db, { secureCookies: false }).createSession(seed.userId, {});
+    const cookie = `${SESSION_COOKIE}=${session.id}`;
+    const listUrl = `${BASE}/api/v1/teams/${seed.teamSlug}/scenarios`;
+
+    t = Date.now();
+    app = startApp();
+    await waitForApp(listUrl, cookie);
+    console.log(`next start ready in ${((Date.now() - t) / 1000).toFixed(1)} s on ${BASE}`);
+    await autocannon({ url: listUrl, connections: 10, duration: 3, headers: { cookie } });
+
+    let listIndex = 0;
+    const sorts = ["updated", "updated", "name", "review"];
+    const list = await measure("list", {
+      url: listUrl,
+      connections: CONNECTIONS,
+      duration: SECONDS,
+      headers: { cookie },
+      requests: [
+        {
+          setupRequest: (req) => {
+            const i = listIndex++;
+            return {
+              ...req,
+              path: `${new URL(listUrl).pathname}?page=${1 + (i % 40)}&pageSize=25&sort=${sorts[i % sorts.length]}`,
+            };
+          },
+        },
+      ],
+    });
+
+    // Each save names the revision it started from; requests walk the 10,000 scenarios so no
+    // two in flight share one, and the expected base grows by one per full round.
+    const file = JSON.parse(
+      readFileSync(path.join(process.cwd(), "test/fixtures/demo-scenario.json"), "utf8"),
+    );
+    let saveIndex = 0;
+    const save = await measure("save", {
+      url: BASE,
+      connections: CONNECTIONS,
+      duration: SECONDS,
+      method: "POST",
+      headers: { cookie, "content-type": "application/json" },
+      requests: [
+        {
+          setupRequest: (req) => {
+            const i = saveIndex++;
+            const scenario = ids[i % ids.length];
+            const base = REVISIONS_PER_SCENARIO + Math.floor(i / ids.length);
+            return {
+              ...req,
+              method: "POST",
+              path: `/api/v1/teams/${seed.teamSlug}/scenarios/${scenario}/revisions`,
+              body: JSON.stringify({ baseRevision: base, message: `bench save ${i}`, file }),
+            };
+          },
+        },
+      ],
+    });
+
+    for (const p of [list, save]) {
+      console.log(
+        `${p.name.padEnd(5)} requests=${p.requests} rps=${p.rps} p50=${p.p50}ms p95=${p.p95}ms p99=${p.p99}ms errors=${p.errors} statuses=${JSON.stringify(p.statuses)}`,
+      );
+    }
+    console.log(
+      `targets: list p95 < 50 ms, save p95 < 100 ms (${CONNECTIONS} connections, ${SECONDS} s each, loopback)`,
+    );
+    console.log(
+      `bench:api: list_p95=${list.p95} save_p95=${save.p95} rps=${list.rps} errors=${list.errors + save.errors}`,
+    );
+  } finally {
+    stopApp();
+    await close();
+  }
+}
+
+main().catch((error: unknown) => {
+  console.error("bench:api failed:", error instanceof Error ? error.message : error);
+  process.exit(1);
+});
