@@ -2,6 +2,7 @@ import { eq } from "drizzle-orm";
 
 import { hashPassword } from "@/lib/auth/password";
 import type { Role } from "@/lib/auth/permissions";
+import { seedDemoRecords } from "@/lib/records/seed-demo-records";
 
 import { createDb, requireDatabaseUrl } from "./client";
 import { memberships, teams } from "./schema/teams";
@@ -42,6 +43,11 @@ async function main() {
         .values({ teamId: team.id, userId: user.id, role: demo.role })
         .onConflictDoNothing();
     }
+    const [editor] = await db
+      .select()
+      .from(users)
+      .where(eq(users.email, emailOf("editor")));
+    await seedDemoRecords(db, team.id, editor?.id ?? null);
     console.log(`Demo team (invented data): "${TEAM.name}" at /teams/${TEAM.slug}`);
     console.log("Demo accounts (invented; passwords as seeded, unless changed since):");
     for (const demo of DEMO_USERS) {

@@ -7,6 +7,7 @@ export interface CurveTrace {
   x: number[];
   y: number[];
   dash?: boolean;
+  markers?: boolean;
 }
 
 /** Stress against strain, one or more curves (measured solid, computed dashed). */
@@ -28,7 +29,7 @@ export function CurveChart({
       <Plot
         data={traces.map((t) => ({
           type: "scatter",
-          mode: "lines",
+          mode: t.markers ? "markers" : "lines",
           name: t.name,
           x: t.x,
           y: t.y,

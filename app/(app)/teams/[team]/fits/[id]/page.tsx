@@ -1,0 +1,72 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+
+import { DesignCaution } from "@/components/calibration/design-caution";
+import { FitOverlay } from "@/components/calibration/fit-overlay";
+import { LoopTable } from "@/components/calibration/loop-table";
+import { ParamsTable } from "@/components/calibration/params-table";
+import { getDb } from "@/db/index";
+import { requireTeamRole } from "@/lib/auth/guard";
+import { isAppError } from "@/lib/errors";
+import { getFit } from "@/lib/records/fits";
+
+import { TeamNav } from "../../team-nav";
+
+export const metadata: Metadata = { title: "Fit" };
+
+export default async function FitPage({
+  params,
+}: {
+  params: Promise<{ team: string; id: string }>;
+}) {
+  const { team: slug, id } = await params;
+  const ctx = await requireTeamRole(slug, "team:read");
+  const loaded = await getFit(getDb(), ctx.actor, slug, id).catch((e: unknown) => {
+    if (isAppError(e)) notFound();
+    throw e;
+  });
+  const { fit, overlay } = loaded;
+  const names = Object.fromEntries(overlay.map((o) => [o.id, o.name]));
+  return (
+    <>
+      <TeamNav slug={ctx.team.slug} name={ctx.team.name} role={ctx.role} />
+      <h2 className="font-display text-2xl font-semibold">
+        Fit → {fit.parameterSetName ?? "(parameter set deleted)"}
+      </h2>
+      <p className="mt-1 text-sm text-ink-soft">
+        {fit.method === "identify" ? "Identification per spec E" : "Levenberg–Marquardt refinement"}
+        , {fit.createdAt.slice(0, 10)} by {fit.createdBy?.name ?? "former member"}
+      </p>
+      <div className="mt-4">
+        <DesignCaution />
+      </div>
+      <div className="mt-6 grid gap-6 md:grid-cols-[auto_1fr]">
+        <ParamsTable params={fit.params} />
+        <div className="space-y-4">
+          <FitOverlay curves={overlay} />
+          <ul className="text-sm" data-testid="fit-residuals">
+            {fit.residuals.map((r) => (
+              <li key={r.id}>
+                {names[r.id] ?? r.id}: RMS{" "}
+                {r.rms < 0 ? "— (not replayable)" : `${r.rms.toPrecision(3)} MPa`} over {r.points}{" "}
+                points
+              </li>
+            ))}
+          </ul>
+          {fit.warnings.map((w) => (
+            <p key={w} className="rounded bg-amber-50 px-3 py-2 text-sm text-amber-900">
+              {w}
+            </p>
+          ))}
+        </div>
+      </div>
+      {fit.reports.map((r) =>
+        r.loops.length > 0 ? (
+          <div key={r.id} className="mt-6">
+            <LoopTable loops={r.loops} caption={names[r.id] ?? r.id} />
+          </div>
+        ) : null,
+      )}
+    </>
+  );
+}
