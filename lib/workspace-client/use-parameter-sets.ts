@@ -1,0 +1,37 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+
+import { apiFetch } from "./api-fetch";
+import { teamApi } from "./api-urls";
+import { workspaceKeys } from "./query-keys";
+import type { ParameterSetListResponse, ParameterSetView } from "./types";
+
+export function useParameterSets(slug: string, initial?: ParameterSetListResponse) {
+  return useQuery({
+    queryKey: workspaceKeys.parameterSets(slug),
+    queryFn: () => apiFetch<ParameterSetListResponse>(teamApi(slug).parameterSets()),
+    initialData: initial,
+  });
+}
+
+export function useRenameParameterSet(slug: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, name }: { id: string; name: string }) =>
+      apiFetch<ParameterSetView>(teamApi(slug).parameterSet(id), {
+        method: "PATCH",
+        body: { name },
+      }),
+    onSettled: () => client.invalidateQueries({ queryKey: workspaceKeys.parameterSets(slug) }),
+  });
+}
+
+export function useDeleteParameterSet(slug: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) =>
+      apiFetch<{ deleted: string }>(teamApi(slug).parameterSet(id), { method: "DELETE" }),
+    onSettled: () => client.invalidateQueries({ queryKey: workspaceKeys.parameterSets(slug) }),
+  });
+}
