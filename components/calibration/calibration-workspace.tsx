@@ -119,7 +119,11 @@ export function CalibrationWorkspace({
           {refined ? (
             <div className="space-y-2">
               <h3 className="font-medium">Refined values</h3>
-              <ParamsTable params={refined.result.params} identified={refined.free} />
+              <ParamsTable
+                params={refined.result.params}
+                identified={refined.free}
+                sourceWord="refined"
+              />
             </div>
           ) : null}
           <SaveFitForm slug={slug} body={saveBody} />

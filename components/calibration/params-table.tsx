@@ -16,13 +16,21 @@ const ROWS: [keyof MaterialParams, string][] = [
   ["dcrit", ""],
 ];
 
+/** Four significant digits, without an exponent for moduli in MPa. */
+export function formatValue(v: number): string {
+  return Math.abs(v) >= 1000 ? v.toFixed(0) : v.toPrecision(4);
+}
+
 /** The values of a parameter set; those the records informed are marked. */
 export function ParamsTable({
   params,
-  identified = [],
+  identified,
+  sourceWord = "from the records",
 }: {
   params: MaterialParams;
+  /** When given, a column says which values came from the records (or were free). */
   identified?: (keyof MaterialParams)[];
+  sourceWord?: string;
 }) {
   return (
     <table className="text-sm" data-testid="params-table">
@@ -33,12 +41,14 @@ export function ParamsTable({
               {key}
             </th>
             <td className="py-1 pr-2 text-right tabular-nums" data-param={key}>
-              {Number(params[key]).toPrecision(4)}
+              {formatValue(Number(params[key]))}
             </td>
             <td className="py-1 pr-4 text-ink-soft">{unit}</td>
-            <td className="py-1 text-xs text-ink-faint">
-              {identified.includes(key) ? "from the records" : "starting value"}
-            </td>
+            {identified ? (
+              <td className="py-1 text-xs text-ink-faint">
+                {identified.includes(key) ? sourceWord : "starting value"}
+              </td>
+            ) : null}
           </tr>
         ))}
       </tbody>
