@@ -5,33 +5,14 @@
  * Needs nothing but the source tree (no database). Run: `npm run bench`.
  */
 import { performance } from "node:perf_hooks";
+import { DEMO_SMC } from "../lib/mechanics/demo-set";
 import { runPath } from "../lib/mechanics/driver";
 import { RESULT_COLUMNS, type Leg, type MaterialParams } from "../lib/mechanics/types";
 
 const RUNS = 5;
 
 /** Spec A.3 demo SMC set [I]. */
-const DEMO: MaterialParams = {
-  E1: 11000,
-  E2: 11000,
-  nu12: 0.3,
-  G12: 4230.769,
-  Y0_1: 0.05,
-  Y0_2: 0.05,
-  a1: 0.6,
-  a2: 0.6,
-  b: 0.3,
-  k6: 1,
-  alpha: 0.005,
-  beta: 0.005,
-  dcrit: 0.45,
-  dmax: 0.99,
-  law: "sqrtY",
-  frame: "fixed",
-  thetaD: 0,
-  Xc: null,
-  onFailure: "stop",
-};
+const DEMO: MaterialParams = DEMO_SMC;
 
 /** An orthotropic short-fibre set (spec D.14 set A) with its damage axes at 30° to the load axes. */
 const ROTATED: MaterialParams = {

@@ -7,31 +7,12 @@
  * permanent strain alpha·d, D.8 memory): loading legs in strain control, unloading legs in stress
  * control to σ = 0, the same targets the driver would be given, so the driver reproduces it.
  */
+import { DEMO_SMC } from "@/lib/mechanics/demo-set";
 import type { MaterialParams } from "@/lib/mechanics/types";
 import type { RecordPoints } from "./types";
 
 /** Spec A.3 demo SMC set [I]: invented values. */
-export const DEMO_PARAMS: MaterialParams = {
-  E1: 11000,
-  E2: 11000,
-  nu12: 0.3,
-  G12: 11000 / (2 * 1.3),
-  Y0_1: 0.05,
-  Y0_2: 0.05,
-  a1: 0.6,
-  a2: 0.6,
-  b: 0.3,
-  k6: 1,
-  alpha: 0.005,
-  beta: 0.005,
-  dcrit: 0.45,
-  dmax: 0.99,
-  law: "sqrtY",
-  frame: "fixed",
-  thetaD: 0,
-  Xc: null,
-  onFailure: "stop",
-};
+export const DEMO_PARAMS: MaterialParams = DEMO_SMC;
 
 export interface DemoCurveOptions {
   peaks?: number[]; // strain peaks, default 0.002, 0.004, … 0.014 (spec D.18)

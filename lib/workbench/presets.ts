@@ -2,6 +2,7 @@
  * Invented demonstration materials. They sit in plausible windows for the material classes but
  * belong to no real product or test campaign; the labels say so.
  */
+import { DEMO_SMC } from "@/lib/mechanics/demo-set";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
 export interface Preset {
@@ -16,28 +17,7 @@ const demoSmc: Preset = {
   key: "demo-smc",
   name: "Demo SMC (invented values)",
   note: "The demo set of the law's specification: isotropic undamaged SMC-like paste, 11 GPa.",
-  params: {
-    label: "Demo SMC (invented values)",
-    E1: 11000,
-    E2: 11000,
-    nu12: 0.3,
-    G12: 4230.769,
-    Y0_1: 0.05,
-    Y0_2: 0.05,
-    a1: 0.6,
-    a2: 0.6,
-    b: 0.3,
-    k6: 1,
-    alpha: 0.005,
-    beta: 0.005,
-    dcrit: 0.45,
-    dmax: 0.99,
-    law: "sqrtY",
-    frame: "fixed",
-    thetaD: 0,
-    Xc: null,
-    onFailure: "stop",
-  },
+  params: { label: "Demo SMC (invented values)", ...DEMO_SMC },
 };
 
 /** Orthotropic injection-moulded short-glass polyamide, axis 1 along the flow. */
