@@ -11,6 +11,9 @@ import { FitCancelled, FitClient } from "@/workers/fit-client";
 
 import { loadRecordInputs } from "./use-record-inputs";
 
+/** Bounds shown with four significant digits; the user edits them as typed. */
+const round4 = (v: number) => Number(v.toPrecision(4));
+
 export interface RefinePanelProps {
   slug: string;
   recordIds: string[];
@@ -37,10 +40,9 @@ export function RefinePanel({
   const [free, setFree] = useState<FittableParam[]>(initiallyFree);
   const [bounds, setBounds] = useState(
     () =>
-      Object.fromEntries(FITTABLE.map((k) => [k, defaultBounds(k, start[k])])) as Record<
-        FittableParam,
-        [number, number]
-      >,
+      Object.fromEntries(
+        FITTABLE.map((k) => [k, defaultBounds(k, start[k]).map(round4)]),
+      ) as Record<FittableParam, [number, number]>,
   );
   const [progress, setProgress] = useState<RefineProgress | null>(null);
   const [running, setRunning] = useState(false);

@@ -112,4 +112,21 @@ describe("calibration from an uploaded cyclic test", () => {
     expect(traces[1].n).toBe(traces[0].n);
     await screenshot(page, "calibration-fit-overlay");
   });
+
+  it("refines in the fit worker with chosen free parameters and reports the RMS per record", async () => {
+    await page.goto(`/teams/${TEAM}/fits/new`);
+    await page.getByText(/^Demo cyclic tension A \(invented\) — /).click();
+    await page.getByRole("button", { name: "Identify" }).click();
+    await page.getByTestId("loop-table").first().waitFor();
+    for (const key of ["E2", "nu12", "G12", "Y0_2", "a2", "beta", "alpha", "Y0_1"]) {
+      await page.getByLabel(`${key} free`).uncheck();
+    }
+    await page.getByRole("button", { name: "Refine" }).click();
+    const result = page.getByTestId("refine-result");
+    await result.waitFor({ timeout: 90_000 });
+    expect(await result.textContent()).toMatch(
+      /Demo cyclic tension A \(invented\): RMS [0-9.e-]+ MPa over 841 points/,
+    );
+    await screenshot(page, "calibration-refined");
+  });
 });
