@@ -16,7 +16,7 @@ export interface RouteInput<P> {
   query: Record<string, string>;
 }
 
-/** What a handler returns: plain data (200) or data with another status. */
+/** What a handler returns: plain data (200), `Created` data (201), or a finished Response. */
 export class Created<T> {
   constructor(readonly data: T) {}
 }
@@ -37,7 +37,9 @@ export function apiRoute<P>(handler: (input: RouteInput<P>) => Promise<unknown>)
       const params = await context.params;
       const query = Object.fromEntries(new URL(request.url).searchParams);
       const result = await handler({ request, params, actor: session.actor, db, query });
-      response = result instanceof Created ? jsonResponse(result.data, 201) : jsonResponse(result);
+      if (result instanceof Response) response = result;
+      else if (result instanceof Created) response = jsonResponse(result.data, 201);
+      else response = jsonResponse(result);
     } catch (error) {
       response = errorResponse(error);
     }

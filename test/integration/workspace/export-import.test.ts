@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
 
+import * as exportRoute from "@/app/api/v1/teams/[team]/export/route";
+
 import { addComment, editComment } from "@/lib/workspace/comments";
 import { exportTeam } from "@/lib/workspace/export";
 import type { TeamExport } from "@/lib/workspace/export-schema";
@@ -12,9 +14,18 @@ import { createTeam } from "@/lib/teams/create";
 
 import { openTestDb, recordingMailer, unique } from "../support/db";
 import { outcome } from "../support/outcome";
-import { demoFileWith, makeWorld, SET_VALUES, type World } from "../support/workspace";
+import {
+  callRoute,
+  closeAppPoolAfterAll,
+  cookieFor,
+  demoFileWith,
+  makeWorld,
+  SET_VALUES,
+  type World,
+} from "../support/workspace";
 
 const db = openTestDb();
+closeAppPoolAfterAll();
 
 /** A team with history: two scenarios, four revisions, reviews, threaded pinned comments, sets. */
 async function richWorld(): Promise<World> {
@@ -174,5 +185,20 @@ describe("team export and import", () => {
     expect(report.unmatchedPeople).toEqual(["gone@elsewhere.example"]);
     const again = await exportTeam(db, w.members.owner, target.slug);
     expect(again.scenarios[0].revisions[0].author).toBeNull();
+  });
+
+  it("the export route can hand the document over as a file download", async () => {
+    const w = await makeWorld(db);
+    const r = await callRoute(exportRoute.GET, {
+      url: "http://app.test/x?download=1",
+      params: { team: w.slug },
+      cookie: await cookieFor(db, w.members.viewer),
+    });
+    expect(r.status).toBe(200);
+    expect(r.headers.get("content-disposition")).toMatch(
+      new RegExp(`^attachment; filename="craquelure-${w.slug}-\\d{4}-\\d{2}-\\d{2}\\.json"$`),
+    );
+    expect(r.body.format).toBe("craquelure.team-export/1");
+    expect(r.body.scenarios).toHaveLength(1);
   });
 });
