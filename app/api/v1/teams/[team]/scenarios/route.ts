@@ -1,11 +1,13 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { tokenRoute } from "@/lib/api/token-route";
 import { apiRoute, Created } from "@/lib/api/route";
 import { createScenario, listScenarios } from "@/lib/workspace/scenarios";
 
 type Params = { team: string };
 
 /** team:read → ScenarioListResponse (query: sort, dir, tag, review, author, q, page, pageSize). */
-export const GET = apiRoute<Params>(({ db, actor, params, query }) =>
+// Also open to personal API tokens of this team (lib/api/token-route.ts).
+export const GET = tokenRoute<Params>("team:read", ({ db, actor, params, query }) =>
   listScenarios(db, actor, params.team, query),
 );
 

@@ -1,11 +1,13 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { tokenRoute } from "@/lib/api/token-route";
 import { apiRoute, Created } from "@/lib/api/route";
 import { listRevisions, saveRevision } from "@/lib/workspace/revisions";
 
 type Params = { team: string; scenario: string };
 
 /** team:read → RevisionListResponse (newest first). */
-export const GET = apiRoute<Params>(({ db, actor, params }) =>
+// Also open to personal API tokens of this team (lib/api/token-route.ts).
+export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
   listRevisions(db, actor, params.team, params.scenario),
 );
 

@@ -1,9 +1,10 @@
-import { apiRoute } from "@/lib/api/route";
+import { tokenRoute } from "@/lib/api/token-route";
 import { getRevision } from "@/lib/workspace/revisions";
 
 type Params = { team: string; scenario: string; number: string };
 
 /** team:read → RevisionResponse (meta + the stored scenario file). */
-export const GET = apiRoute<Params>(({ db, actor, params }) =>
+// Also open to personal API tokens of this team (lib/api/token-route.ts).
+export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
   getRevision(db, actor, params.team, params.scenario, params.number),
 );

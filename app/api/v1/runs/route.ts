@@ -1,0 +1,24 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { tokenRoute } from "@/lib/api/token-route";
+import { AppError } from "@/lib/errors";
+import { budgetedRunner, runBudgetMs } from "@/lib/runs/budgeted-runner";
+import { readRunRequest } from "@/lib/runs/run-request";
+import { runScenario } from "@/lib/runs/run-scenario";
+
+/**
+ * Runs a scenario file with the same core and answers exactly what
+ * `npm run --silent drive -- file.json [--set id] [--format csv|json]` prints.
+ * Bearer token (any role) or a signed-in session.
+ */
+export const POST = tokenRoute("team:read", async ({ request, actor, query }) => {
+  if (!actor) throw new AppError("unauthenticated", "Send a Bearer token or sign in first.");
+  const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  const run = readRunRequest(body, query, request.headers.get("accept"));
+  const output = runScenario(run, budgetedRunner(runBudgetMs()));
+  const headers: Record<string, string> = {
+    "content-type": output.contentType,
+    "cache-control": "no-store",
+  };
+  if (output.warnings.length > 0) headers["x-craquelure-warnings"] = output.warnings.join("; ");
+  return new Response(output.body, { status: 200, headers });
+});

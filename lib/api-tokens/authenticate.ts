@@ -1,0 +1,47 @@
+/**
+ * Bearer authentication for the public API. An unknown, malformed or revoked token, or one
+ * whose owner has left the team, is 401. The token acts as its owner, with the lower of the
+ * token's role and the owner's current role, and only in the token's team.
+ */
+import type { Executor } from "@/db/client";
+import { findApiTokenByHash, touchApiToken } from "@/db/queries/api-tokens";
+import type { SignedInActor } from "@/lib/accounts/actor";
+import type { Role } from "@/lib/auth/permissions";
+import { AppError } from "@/lib/errors";
+
+import { lowerRole } from "./roles";
+import { hashApiToken, looksLikeApiToken } from "./secret";
+
+export interface TokenPrincipal {
+  tokenId: string;
+  actor: SignedInActor;
+  teamId: string;
+  teamSlug: string;
+  role: Role;
+}
+
+const REJECTED = "The API token is not valid: it is unknown, revoked, or its owner left the team.";
+
+/** Last-used is written at most once a minute per token, not on every call. */
+const TOUCH_EVERY_MS = 60_000;
+
+export async function authenticateToken(
+  db: Executor,
+  token: string,
+  now: Date = new Date(),
+): Promise<TokenPrincipal> {
+  if (!looksLikeApiToken(token)) throw new AppError("unauthenticated", REJECTED);
+  const found = await findApiTokenByHash(db, hashApiToken(token));
+  if (!found || found.token.revokedAt || !found.memberRole) {
+    throw new AppError("unauthenticated", REJECTED);
+  }
+  const last = found.token.lastUsedAt?.getTime() ?? 0;
+  if (now.getTime() - last > TOUCH_EVERY_MS) await touchApiToken(db, found.token.id, now);
+  return {
+    tokenId: found.token.id,
+    actor: found.user,
+    teamId: found.token.teamId,
+    teamSlug: found.teamSlug,
+    role: lowerRole(found.token.role, found.memberRole),
+  };
+}
