@@ -3,27 +3,19 @@
  * team and carries a role no higher than the owner's role there at creation; at every use the
  * lower of that role and the owner's current role counts (see authenticate.ts).
  */
-import { z } from "zod";
-
 import type { Executor } from "@/db/client";
 import { insertApiToken, listApiTokensOfUser, revokeApiTokenOfUser } from "@/db/queries/api-tokens";
 import type { Actor } from "@/lib/accounts/actor";
 import { recordAudit } from "@/lib/audit";
-import { ROLE_LABELS, ROLES } from "@/lib/auth/permissions";
+import { ROLE_LABELS } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { authorizeTeam } from "@/lib/teams/access";
 import { requireUuid } from "@/lib/workspace/errors";
 import { parseWithPath } from "@/lib/workspace/parse";
 
 import { roleAtMost } from "./roles";
+import { createApiTokenSchema } from "./schema";
 import { newApiToken } from "./secret";
-
-export const createApiTokenSchema = z.strictObject({
-  name: z.string().trim().min(1, "Give the token a name.").max(100),
-  team: z.string().min(1).max(100).describe("Team slug"),
-  role: z.enum(ROLES),
-});
-export type CreateApiTokenInput = z.input<typeof createApiTokenSchema>;
 
 function requireActor(actor: Actor) {
   if (!actor) throw new AppError("unauthenticated", "Please sign in first.");

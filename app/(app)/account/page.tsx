@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 
 import { resendVerificationAction } from "@/app/(auth)/actions";
+import { ApiTokensCard } from "@/components/api-tokens/api-tokens-card";
 import { TokenActionButton } from "@/components/auth/token-action-button";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
@@ -39,6 +40,7 @@ export default async function AccountPage() {
           </div>
         </Card>
       )}
+      <ApiTokensCard actor={actor} />
       <Card title="Password" id="password">
         <p className="text-sm text-ink-soft">
           To change it,{" "}
