@@ -61,8 +61,10 @@ export interface ReplayResult {
 }
 
 /**
- * dcrit only flags failure; to compare the whole history the replay lets the point go on past
- * it (onFailure 'continue'), so a fit is not cut short by the flag.
+ * dcrit only flags failure. The replay compares the law's curve with the record over the whole
+ * history, so it moves the flag out of reach (just below dmax) and lets the point go on: with the
+ * identified dcrit (often the last loop's damage) 'continue' would otherwise jump d to dmax at
+ * the last peak and collapse the replayed stress there.
  */
 export function replayRecord(
   params: MaterialParams,
@@ -85,7 +87,7 @@ export function replayRecord(
       increments: 1,
     };
   }
-  const result = runPath({ ...params, onFailure: "continue" }, legs);
+  const result = runPath({ ...params, dcrit: params.dmax - 1e-9, onFailure: "continue" }, legs);
   const column = result.columns[plan.output];
   const predicted = new Float64Array(n);
   const completed = Math.min(n, result.rows - 1);
