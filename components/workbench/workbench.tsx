@@ -93,7 +93,7 @@ export function Workbench({ initialScenario, readOnly, onSave, syncUrl }: Workbe
         >
           Copy link
         </button>
-        {onSave ? (
+        {readOnly ? null : onSave ? (
           <button
             type="button"
             onClick={() => void onSave(file)}

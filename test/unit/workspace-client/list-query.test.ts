@@ -6,6 +6,7 @@ import {
   parseListState,
   toggleSort,
 } from "@/lib/workspace-client/list-query";
+import { parseTags } from "@/lib/workspace-client/tags";
 
 describe("scenario list state in the address", () => {
   it("falls back to newest first on page 1 for an empty or hand-mangled address", () => {
@@ -44,5 +45,12 @@ describe("scenario list state in the address", () => {
   it("counts pages, at least one", () => {
     expect(pageCount(0, 20)).toBe(1);
     expect(pageCount(41, 20)).toBe(3);
+  });
+});
+
+describe("tags typed as text", () => {
+  it("splits on commas, trims and drops empties and repeats", () => {
+    expect(parseTags(" crash, 23 °C ,,crash ")).toEqual(["crash", "23 °C"]);
+    expect(parseTags("")).toEqual([]);
   });
 });

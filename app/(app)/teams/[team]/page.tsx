@@ -19,14 +19,27 @@ export default async function TeamHomePage({ params }: { params: Promise<{ team:
     <>
       <TeamNav slug={ctx.team.slug} name={ctx.team.name} role={ctx.role} />
       <div className="grid gap-6 md:grid-cols-2">
-        {/* Filled by later work; the headings fix where each kind of work lives. */}
         <Card title="Scenarios" id="scenarios">
           <p className="text-sm text-ink-soft">
-            No scenarios yet. Saved scenarios and their revisions will be listed here.
+            Saved paths and parameter sets, with their revisions and reviews.
           </p>
+          <Link
+            href={`/teams/${ctx.team.slug}/scenarios`}
+            className="mt-3 inline-block text-sm text-verdigris-dark hover:underline"
+          >
+            Scenarios
+          </Link>
         </Card>
         <Card title="Parameter sets" id="parameter-sets">
-          <p className="text-sm text-ink-soft">No parameter sets yet.</p>
+          <p className="text-sm text-ink-soft">
+            The team&apos;s library of named values, typed in, fitted or derived.
+          </p>
+          <Link
+            href={`/teams/${ctx.team.slug}/parameter-sets`}
+            className="mt-3 inline-block text-sm text-verdigris-dark hover:underline"
+          >
+            Parameter sets
+          </Link>
         </Card>
         <Card title="Test records" id="test-records">
           <p className="text-sm text-ink-soft">

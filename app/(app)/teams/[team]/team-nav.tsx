@@ -21,18 +21,30 @@ export function TeamNav({ slug, name, role }: { slug: string; name: string; role
           You: {ROLE_LABELS[role]}
         </span>
       </div>
-      <nav aria-label="Team" className="mt-3 flex gap-4 text-sm">
+      <nav aria-label="Team" className="mt-3 flex flex-wrap gap-x-4 gap-y-1 text-sm">
         <Link href={`/teams/${slug}`} className="text-verdigris-dark hover:underline">
           Overview
         </Link>
-        <Link href={`/teams/${slug}/members`} className="text-verdigris-dark hover:underline">
-          Members
+        <Link href={`/teams/${slug}/scenarios`} className="text-verdigris-dark hover:underline">
+          Scenarios
+        </Link>
+        <Link
+          href={`/teams/${slug}/parameter-sets`}
+          className="text-verdigris-dark hover:underline"
+        >
+          Parameter sets
         </Link>
         <Link href={`/teams/${slug}/tests`} className="text-verdigris-dark hover:underline">
           Test records
         </Link>
         <Link href={`/teams/${slug}/fits`} className="text-verdigris-dark hover:underline">
           Fits
+        </Link>
+        <Link href={`/teams/${slug}/members`} className="text-verdigris-dark hover:underline">
+          Members
+        </Link>
+        <Link href={`/teams/${slug}/audit`} className="text-verdigris-dark hover:underline">
+          Audit log
         </Link>
         {can(role, "team:rename") ? (
           <Link href={`/teams/${slug}/settings`} className="text-verdigris-dark hover:underline">

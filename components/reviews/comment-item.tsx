@@ -1,0 +1,75 @@
+"use client";
+
+import { useState } from "react";
+
+import { formatWhen, personName } from "@/lib/workspace-client/format";
+import { isPending, type NewComment } from "@/lib/workspace-client/optimistic-comments";
+import type { CommentNode } from "@/lib/workspace-client/types";
+
+import { CommentForm } from "./comment-form";
+
+export interface CommentItemProps {
+  comment: CommentNode;
+  canReply: boolean;
+  maxIncrement: number;
+  onReply: (input: NewComment) => void;
+}
+
+/** One comment (text only, never markup) with its replies below it. */
+export function CommentItem({ comment, canReply, maxIncrement, onReply }: CommentItemProps) {
+  const [replying, setReplying] = useState(false);
+  const pending = isPending(comment);
+  return (
+    <li className={pending ? "opacity-60" : undefined} data-testid="comment">
+      <p className="text-xs text-ink-faint">
+        <span className="font-medium text-ink">{personName(comment.author)}</span>,{" "}
+        {pending ? "sending…" : formatWhen(comment.createdAt)}
+        {comment.editedAt ? " (edited)" : ""}
+        {comment.increment !== null ? (
+          <span className="ml-2 rounded bg-verdigris-light px-1.5 text-verdigris-dark">
+            at increment {comment.increment}
+          </span>
+        ) : null}
+      </p>
+      <p className="whitespace-pre-wrap">{comment.body}</p>
+      {canReply && !pending && !replying ? (
+        <button
+          type="button"
+          onClick={() => setReplying(true)}
+          className="text-xs text-verdigris-dark hover:underline"
+        >
+          Reply
+        </button>
+      ) : null}
+      {replying ? (
+        <div className="ml-4 mt-2">
+          <CommentForm
+            idPrefix={`reply-${comment.id}`}
+            label={`Reply to ${personName(comment.author)}`}
+            submitLabel="Reply"
+            parentId={comment.id}
+            maxIncrement={maxIncrement}
+            onSubmit={(input) => {
+              onReply(input);
+              setReplying(false);
+            }}
+            onCancel={() => setReplying(false)}
+          />
+        </div>
+      ) : null}
+      {comment.replies.length ? (
+        <ul className="ml-4 mt-2 space-y-2 border-l-2 border-glaze-line pl-3">
+          {comment.replies.map((r) => (
+            <CommentItem
+              key={r.id}
+              comment={r}
+              canReply={canReply}
+              maxIncrement={maxIncrement}
+              onReply={onReply}
+            />
+          ))}
+        </ul>
+      ) : null}
+    </li>
+  );
+}

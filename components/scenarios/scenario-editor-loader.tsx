@@ -1,0 +1,12 @@
+"use client";
+
+import dynamic from "next/dynamic";
+
+/** Client only: the workbench starts its solver worker on mount. */
+export const ScenarioEditorLoader = dynamic(
+  () => import("./scenario-editor").then((m) => m.ScenarioEditor),
+  {
+    ssr: false,
+    loading: () => <p className="px-4 py-8 text-ink-faint">Loading the workbench…</p>,
+  },
+);

@@ -1,0 +1,99 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+
+import { Workbench } from "@/components/workbench/workbench";
+import type { OpenedScenario, ScenarioFileJson } from "@/lib/workbench/scenario-state";
+import { messageOf } from "@/lib/workspace-client/api-fetch";
+import { teamPages } from "@/lib/workspace-client/api-urls";
+import { type SaveConflict, saveConflictOf } from "@/lib/workspace-client/conflict";
+import { useSaveRevision } from "@/lib/workspace-client/use-save-revision";
+
+import { ConflictPanel } from "./conflict-panel";
+import { SaveRevisionForm } from "./save-revision-form";
+
+export interface ScenarioEditorProps {
+  slug: string;
+  scenarioId: string;
+  /** The revision on screen; saves name it as their base. */
+  number: number;
+  file: OpenedScenario;
+  editable: boolean;
+}
+
+/** The workbench on a saved revision, with save-as-new-revision and the 409 path. */
+export function ScenarioEditor({ slug, scenarioId, number, file, editable }: ScenarioEditorProps) {
+  const router = useRouter();
+  const save = useSaveRevision(slug, scenarioId);
+  const [pending, setPending] = useState<ScenarioFileJson | null>(null);
+  const [conflict, setConflict] = useState<SaveConflict | null>(null);
+  const [message, setMessage] = useState("");
+  const [error, setError] = useState<string | null>(null);
+
+  const submit = (base: number, text: string) => {
+    if (!pending) return;
+    setMessage(text);
+    setError(null);
+    save.mutate(
+      { baseRevision: base, message: text, file: pending },
+      {
+        onSuccess: () => {
+          setPending(null);
+          setConflict(null);
+          router.push(teamPages(slug).scenario(scenarioId));
+          router.refresh();
+        },
+        onError: (e) => {
+          const clash = saveConflictOf(e, base);
+          if (clash) setConflict(clash);
+          else setError(messageOf(e));
+        },
+      },
+    );
+  };
+
+  const dismiss = () => {
+    setPending(null);
+    setConflict(null);
+    setError(null);
+  };
+
+  return (
+    <div className="space-y-3">
+      {pending && conflict ? (
+        <div className="mx-auto max-w-[1600px] px-4">
+          <ConflictPanel
+            slug={slug}
+            scenarioId={scenarioId}
+            conflict={conflict}
+            mine={pending}
+            message={message}
+            pending={save.isPending}
+            error={error}
+            onSaveOnTop={submit}
+            onDismiss={dismiss}
+          />
+        </div>
+      ) : null}
+      {pending && !conflict ? (
+        <div className="mx-auto max-w-[1600px] px-4">
+          <SaveRevisionForm
+            summary={`Saves a new revision on top of revision ${number}; revision ${number} stays as it is.`}
+            submitLabel="Save new revision"
+            pending={save.isPending}
+            error={error}
+            initialMessage={message}
+            onSubmit={(text) => submit(number, text)}
+            onCancel={dismiss}
+          />
+        </div>
+      ) : null}
+      <Workbench
+        initialScenario={file}
+        readOnly={!editable}
+        onSave={editable ? (f) => setPending(f) : undefined}
+      />
+    </div>
+  );
+}
