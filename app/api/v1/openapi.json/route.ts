@@ -1,0 +1,6 @@
+import { openApiDocument } from "@/lib/openapi/document";
+
+/** Public: the document describes the API, it grants nothing. */
+export function GET(): Response {
+  return Response.json(openApiDocument(), { headers: { "cache-control": "public, max-age=300" } });
+}
