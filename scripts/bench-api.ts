@@ -5,60 +5,19 @@
  */
 import { spawn, type ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
+import os from "node:os";
 import path from "node:path";
-
-import autocannon from "autocannon";
 
 import { createDb, requireDatabaseUrl } from "@/db/client";
 import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
 
+import { measure } from "./bench-api-measure";
 import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";
 
 const PORT = Number(process.env.BENCH_APP_PORT ?? 33000);
 const BASE = `http://127.0.0.1:${PORT}`;
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
-
-interface Phase {
-  name: string;
-  requests: number;
-  rps: number;
-  p50: number;
-  p95: number;
-  p99: number;
-  errors: number;
-  statuses: Record<number, number>;
-}
-
-const percentile = (sorted: number[], p: number) =>
-  sorted.length
-    ? sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)]
-    : NaN;
-
-/** autocannon has no p95 of its own: every response time is kept and ranked here. */
-async function measure(name: string, options: autocannon.Options): Promise<Phase> {
-  const times: number[] = [];
-  const statuses: Record<number, number> = {};
-  const result = await new Promise<autocannon.Result>((resolve, reject) => {
-    const instance = autocannon(options, (error, done) => (error ? reject(error) : resolve(done)));
-    instance.on("response", (_client, status, _bytes, ms) => {
-      times.push(ms);
-      statuses[status] = (statuses[status] ?? 0) + 1;
-    });
-  });
-  times.sort((a, b) => a - b);
-  const bad = Object.entries(statuses).reduce((n, [s, c]) => n + (Number(s) >= 400 ? c : 0), 0);
-  return {
-    name,
-    requests: times.length,
-    rps: Math.round(times.length / (result.duration || SECONDS)),
-    p50: percentile(times, 50),
-    p95: percentile(times, 95),
-    p99: percentile(times, 99),
-    errors: bad + result.errors + result.timeouts,
-    statuses,
-  };
-}
 
 function startApp(): ChildProcess {
   const nextBin = path.join(process.cwd(), "node_modules/next/dist/bin/next");
@@ -107,27 +66,35 @@ async function main() {
     app = startApp();
     await waitForApp(listUrl, cookie);
     console.log(`next start ready in ${((Date.now() - t) / 1000).toFixed(1)} s on ${BASE}`);
-    await autocannon({ url: listUrl, connections: 10, duration: 3, headers: { cookie } });
+    await measure(
+      "warm-up",
+      { url: listUrl, connections: 10, duration: 3, headers: { cookie } },
+      app.pid,
+    );
 
     let listIndex = 0;
     const sorts = ["updated", "updated", "name", "review"];
-    const list = await measure("list", {
-      url: listUrl,
-      connections: CONNECTIONS,
-      duration: SECONDS,
-      headers: { cookie },
-      requests: [
-        {
-          setupRequest: (req) => {
-            const i = listIndex++;
-            return {
-              ...req,
-              path: `${new URL(listUrl).pathname}?page=${1 + (i % 40)}&pageSize=25&sort=${sorts[i % sorts.length]}`,
-            };
+    const list = await measure(
+      "list",
+      {
+        url: listUrl,
+        connections: CONNECTIONS,
+        duration: SECONDS,
+        headers: { cookie },
+        requests: [
+          {
+            setupRequest: (req) => {
+              const i = listIndex++;
+              return {
+                ...req,
+                path: `${new URL(listUrl).pathname}?page=${1 + (i % 40)}&pageSize=25&sort=${sorts[i % sorts.length]}`,
+              };
+            },
           },
-        },
-      ],
-    });
+        ],
+      },
+      app.pid,
+    );
 
     // Each save names the revision it started from; requests walk the 10,000 scenarios so no
     // two in flight share one, and the expected base grows by one per full round.
@@ -135,34 +102,45 @@ async function main() {
       readFileSync(path.join(process.cwd(), "test/fixtures/demo-scenario.json"), "utf8"),
     );
     let saveIndex = 0;
-    const save = await measure("save", {
-      url: BASE,
-      connections: CONNECTIONS,
-      duration: SECONDS,
-      method: "POST",
-      headers: { cookie, "content-type": "application/json" },
-      requests: [
-        {
-          setupRequest: (req) => {
-            const i = saveIndex++;
-            const scenario = ids[i % ids.length];
-            const base = REVISIONS_PER_SCENARIO + Math.floor(i / ids.length);
-            return {
-              ...req,
-              method: "POST",
-              path: `/api/v1/teams/${seed.teamSlug}/scenarios/${scenario}/revisions`,
-              body: JSON.stringify({ baseRevision: base, message: `bench save ${i}`, file }),
-            };
+    const save = await measure(
+      "save",
+      {
+        url: BASE,
+        connections: CONNECTIONS,
+        duration: SECONDS,
+        method: "POST",
+        headers: { cookie, "content-type": "application/json" },
+        requests: [
+          {
+            setupRequest: (req) => {
+              const i = saveIndex++;
+              const scenario = ids[i % ids.length];
+              const base = REVISIONS_PER_SCENARIO + Math.floor(i / ids.length);
+              return {
+                ...req,
+                method: "POST",
+                path: `/api/v1/teams/${seed.teamSlug}/scenarios/${scenario}/revisions`,
+                body: JSON.stringify({ baseRevision: base, message: `bench save ${i}`, file }),
+              };
+            },
           },
-        },
-      ],
-    });
+        ],
+      },
+      app.pid,
+    );
 
     for (const p of [list, save]) {
       console.log(
-        `${p.name.padEnd(5)} requests=${p.requests} rps=${p.rps} p50=${p.p50}ms p95=${p.p95}ms p99=${p.p99}ms errors=${p.errors} statuses=${JSON.stringify(p.statuses)}`,
+        `${p.name.padEnd(5)} requests=${p.requests} rps=${p.rps} p50=${p.p50}ms p95=${p.p95}ms p99=${p.p99}ms errors=${p.errors} statuses=${JSON.stringify(p.statuses)} app_cpu_per_request=${p.serverCpuMs}ms`,
       );
     }
+    const load = os
+      .loadavg()
+      .map((x) => x.toFixed(1))
+      .join(" ");
+    console.log(
+      `machine: ${os.cpus().length} cores, load average ${load} (shared with other work)`,
+    );
     console.log(
       `targets: list p95 < 50 ms, save p95 < 100 ms (${CONNECTIONS} connections, ${SECONDS} s each, loopback)`,
     );
