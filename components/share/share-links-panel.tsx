@@ -71,43 +71,42 @@ export function ShareLinksPanel({ slug, scenarioId, number }: ShareLinksPanelPro
         {fresh ? <NewLinkNotice url={fresh} onDone={() => setFresh(null)} /> : null}
         {links.isError ? <p className="text-kiln-dark">{messageOf(links.error)}</p> : null}
         {links.data?.items.length ? (
-          <table className="w-full text-left" data-testid="share-links">
-            <thead className="text-xs text-ink-faint">
-              <tr>
-                <th className="py-1 font-medium">Revision</th>
-                <th className="py-1 font-medium">Created</th>
-                <th className="py-1 font-medium">Expires</th>
-                <th className="py-1 font-medium">Views</th>
-                <th className="py-1 font-medium">State</th>
-                <th />
-              </tr>
-            </thead>
-            <tbody>
-              {links.data.items.map((l) => (
-                <tr key={l.id} className="border-t border-glaze-line/70">
-                  <td className="py-1">rev {l.revision}</td>
-                  <td className="py-1 text-ink-soft">
-                    {personName(l.createdBy)}, {formatWhen(l.createdAt)}
-                  </td>
-                  <td className="py-1 text-ink-soft">{formatWhen(l.expiresAt)}</td>
-                  <td className="py-1">{l.viewCount}</td>
-                  <td className="py-1">{l.state}</td>
-                  <td className="py-1 text-right">
-                    {l.state === "active" ? (
-                      <button
-                        type="button"
-                        disabled={revoke.isPending}
-                        onClick={() => revoke.mutate(l.id)}
-                        className="text-kiln-dark hover:underline"
-                      >
-                        Revoke
-                      </button>
-                    ) : null}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <ul className="divide-y divide-glaze-line" data-testid="share-links">
+            {links.data.items.map((l) => (
+              <li key={l.id} className="flex items-start gap-3 py-2">
+                <div className="min-w-0 flex-1">
+                  <p>
+                    <span className="font-medium">rev {l.revision}</span>{" "}
+                    <span
+                      className={l.state === "active" ? "text-verdigris-dark" : "text-ink-faint"}
+                    >
+                      {l.state}
+                    </span>
+                    <span className="text-ink-soft">
+                      {" "}
+                      · {l.viewCount} {l.viewCount === 1 ? "view" : "views"} ·{" "}
+                      {l.state === "revoked"
+                        ? `revoked ${formatWhen(l.revokedAt)}`
+                        : `until ${formatWhen(l.expiresAt)}`}
+                    </span>
+                  </p>
+                  <p className="text-xs text-ink-faint">
+                    by {personName(l.createdBy)}, {formatWhen(l.createdAt)}
+                  </p>
+                </div>
+                {l.state === "active" ? (
+                  <button
+                    type="button"
+                    disabled={revoke.isPending}
+                    onClick={() => revoke.mutate(l.id)}
+                    className="rounded-md border border-kiln/40 px-2 py-0.5 text-kiln-dark hover:bg-kiln-light"
+                  >
+                    Revoke
+                  </button>
+                ) : null}
+              </li>
+            ))}
+          </ul>
         ) : links.data ? (
           <p className="text-ink-soft">No share links for this scenario.</p>
         ) : null}

@@ -38,6 +38,11 @@ async function curveDrawn(page: Page, points = 20) {
   );
 }
 
+/** Waits for a page value: the app answers through the network, so this polls (not a timing test). */
+function eventually<T>(read: () => Promise<T>, options: { timeout?: number } = {}) {
+  return expect.poll(read, { timeout: options.timeout ?? 30_000, interval: 200 });
+}
+
 async function revisionLine(page: Page): Promise<string> {
   return (await page.getByTestId("revision-line").textContent()) ?? "";
 }
@@ -67,7 +72,7 @@ describe("team workspace: revisions, review, share link", () => {
     await ed.getByRole("button", { name: "Save revision 1" }).click();
     await ed.waitForURL(/\/scenarios\/[0-9a-f-]{36}$/);
     const scenarioPath = new URL(ed.url()).pathname;
-    await expect.poll(() => revisionLine(ed)).toContain("Revision 1 of 1");
+    await eventually(() => revisionLine(ed)).toContain("Revision 1 of 1");
     await curveDrawn(ed);
     await screenshot(ed, "workspace-01-revision-1");
 
@@ -78,18 +83,18 @@ describe("team workspace: revisions, review, share link", () => {
       .getByLabel("What changed (revision message)")
       .fill("Y0_1 raised to 0.08 after the cyclic test");
     await ed.getByRole("button", { name: "Save new revision" }).click();
-    await expect.poll(() => revisionLine(ed), { timeout: 30_000 }).toContain("Revision 2 of 2");
-    await expect.poll(() => ed.getByTestId("revision-diff").textContent()).toContain("Y0_1");
+    await eventually(() => revisionLine(ed)).toContain("Revision 2 of 2");
+    await eventually(() => ed.getByTestId("revision-diff").textContent()).toContain("Y0_1");
     await ed.getByRole("button", { name: "Request review" }).click();
-    await expect
-      .poll(() => ed.locator("#review-title ~ div [data-testid=review-state]").textContent())
-      .toBe("In review");
+    await eventually(() =>
+      ed.locator("#review-title ~ div [data-testid=review-state]").textContent(),
+    ).toBe("In review");
     await screenshot(ed, "workspace-02-revision-2-in-review");
 
     // The team's table lists it with its state.
     await ed.goto(`/teams/${TEAM}/scenarios?tag=e2e-${runId}`);
     const row = ed.getByRole("row", { name: new RegExp(scenarioName) });
-    await expect.poll(() => row.textContent()).toContain("In review");
+    await eventually(() => row.textContent()).toContain("In review");
     expect(await row.textContent()).toContain("rev 2");
     await screenshot(ed, "workspace-03-scenarios-table");
 
@@ -97,25 +102,25 @@ describe("team workspace: revisions, review, share link", () => {
     const rv = await (await newContext(browser)).newPage();
     await signIn(rv, reviewer);
     await rv.goto(scenarioPath);
-    await expect.poll(() => revisionLine(rv)).toContain("Revision 2 of 2");
+    await eventually(() => revisionLine(rv)).toContain("Revision 2 of 2");
     expect(await rv.getByRole("button", { name: "Save revision", exact: true }).count()).toBe(0);
     await rv.getByLabel("Add a comment").fill("Unloading modulus at 0.6 % <b>looks</b> plausible.");
     await rv.getByLabel("Pin to increment (0–", { exact: false }).first().fill("120");
     await rv.getByRole("button", { name: "Comment", exact: true }).click();
     const comment = rv.getByTestId("comment").filter({ hasText: "Unloading modulus" });
-    await expect.poll(() => comment.textContent()).toContain("at increment 120");
+    await eventually(() => comment.textContent()).toContain("at increment 120");
     expect(await comment.textContent()).toContain("<b>looks</b>");
     await rv.getByLabel("Note with the verdict (optional)").fill("Fine for the crash deck.");
     await rv.getByRole("button", { name: "Approve" }).click();
-    await expect.poll(() => rv.getByTestId("review-summary").textContent()).toContain("Approved");
+    await eventually(() => rv.getByTestId("review-summary").textContent()).toContain("Approved");
     await screenshot(rv, "workspace-04-reviewer-approved");
 
     // The editor sees the verdict and has the mail.
     await ed.goto(scenarioPath);
-    await expect.poll(() => ed.getByTestId("review-summary").textContent()).toContain("Approved");
-    await expect
-      .poll(() => ed.getByTestId("comment-list").textContent())
-      .toContain("Unloading modulus");
+    await eventually(() => ed.getByTestId("review-summary").textContent()).toContain("Approved");
+    await eventually(() => ed.getByTestId("comment-list").textContent()).toContain(
+      "Unloading modulus",
+    );
     const mail = await readMail({ to: editor.email, subject: scenarioName });
     expect(mail.subject).toMatch(/approved/i);
     expect(mail.text).toContain("Fine for the crash deck.");
@@ -127,7 +132,7 @@ describe("team workspace: revisions, review, share link", () => {
     await screenshot(ed, "workspace-05-share-link-created");
     const outsider = await (await newContext(browser)).newPage();
     await outsider.goto(new URL(link).pathname);
-    await expect.poll(() => outsider.getByTestId("shared-title").textContent()).toBe(scenarioName);
+    await eventually(() => outsider.getByTestId("shared-title").textContent()).toBe(scenarioName);
     await curveDrawn(outsider);
     expect(await outsider.getByRole("note").first().textContent()).toContain("no design allowable");
     expect(await outsider.getByRole("button", { name: "Save revision" }).count()).toBe(0);
@@ -136,7 +141,7 @@ describe("team workspace: revisions, review, share link", () => {
     // Revoked: the same link shows nothing but "no longer available".
     await ed.getByRole("button", { name: "Done" }).click();
     await ed.getByTestId("share-links").getByRole("button", { name: "Revoke" }).first().click();
-    await expect.poll(() => ed.getByTestId("share-links").textContent()).toContain("revoked");
+    await eventually(() => ed.getByTestId("share-links").textContent()).toContain("revoked");
     const late = await (await newContext(browser)).newPage();
     const response = await late.goto(new URL(link).pathname);
     expect(response?.status()).toBe(404);
