@@ -32,4 +32,6 @@ export interface ConformanceResult {
   quantities: QuantityComparison[];
   passed: boolean;
   firstFailIncrement: number | null;
+  /** The column mapping the user chose (absent: found by header names). */
+  mapping?: Partial<Record<string, number>>;
 }

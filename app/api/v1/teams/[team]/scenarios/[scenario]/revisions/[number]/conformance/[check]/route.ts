@@ -1,0 +1,18 @@
+import { tokenRoute } from "@/lib/api/token-route";
+import { loadConformanceCheck } from "@/lib/conformance/service";
+
+type Params = { team: string; scenario: string; number: string; check: string };
+
+/** team:read → one recorded check with its comparison per quantity. */
+export const GET = tokenRoute<Params>("team:read", async ({ db, actor, params }) => {
+  const ref = { teamSlug: params.team, scenarioId: params.scenario, number: params.number };
+  const { row } = await loadConformanceCheck(db, actor, ref, params.check);
+  return {
+    id: row.id,
+    fileName: row.fileName,
+    passed: row.passed,
+    firstFailIncrement: row.firstFailStep,
+    createdAt: row.createdAt,
+    result: row.result,
+  };
+});

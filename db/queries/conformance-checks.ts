@@ -1,0 +1,44 @@
+import { and, desc, eq } from "drizzle-orm";
+
+import type { Executor } from "@/db/client";
+import { conformanceChecks, type ConformanceCheckRow } from "@/db/schema/conformance-checks";
+import { users } from "@/db/schema/users";
+
+export async function insertConformanceCheck(
+  db: Executor,
+  values: typeof conformanceChecks.$inferInsert,
+): Promise<ConformanceCheckRow> {
+  const [row] = await db.insert(conformanceChecks).values(values).returning();
+  return row;
+}
+
+/** Newest first, without the uploaded file (it can be large). */
+export async function listConformanceChecksOfRevision(db: Executor, revisionId: string) {
+  return db
+    .select({
+      id: conformanceChecks.id,
+      setId: conformanceChecks.setId,
+      fileName: conformanceChecks.fileName,
+      passed: conformanceChecks.passed,
+      firstFailStep: conformanceChecks.firstFailStep,
+      result: conformanceChecks.result,
+      createdAt: conformanceChecks.createdAt,
+      author: users.name,
+    })
+    .from(conformanceChecks)
+    .leftJoin(users, eq(users.id, conformanceChecks.createdBy))
+    .where(eq(conformanceChecks.revisionId, revisionId))
+    .orderBy(desc(conformanceChecks.createdAt));
+}
+
+export async function findConformanceCheck(
+  db: Executor,
+  revisionId: string,
+  checkId: string,
+): Promise<ConformanceCheckRow | null> {
+  const [row] = await db
+    .select()
+    .from(conformanceChecks)
+    .where(and(eq(conformanceChecks.id, checkId), eq(conformanceChecks.revisionId, revisionId)));
+  return row ?? null;
+}
