@@ -99,7 +99,7 @@ export function ConflictPanel(props: ConflictPanelProps) {
             )}
           </div>
           <SaveRevisionForm
-            summary={`Saves your edits as revision ${conflict.latest + 1}, on top of revision ${conflict.latest}. Revision ${conflict.latest} stays as it is.`}
+            summary={`Saves your edits as revision ${conflict.latest + 1}, on top of revision ${conflict.latest}: every value above becomes yours, where revision ${conflict.latest} differs too. Revision ${conflict.latest} stays as it is; to keep some of its values, type them into the workbench first.`}
             submitLabel={`Save as revision ${conflict.latest + 1}`}
             pending={props.pending}
             error={props.error}

@@ -13,6 +13,7 @@ const runId = randomBytes(3).toString("hex");
 const scenarioName = `Bumper beam SMC ${runId}`;
 const editor = { email: "editor@demo.craquelure.local", password: "demo-editor-password" };
 const reviewer = { email: "reviewer@demo.craquelure.local", password: "demo-reviewer-password" };
+const owner = { email: "owner@demo.craquelure.local", password: "demo-owner-password" };
 
 async function signIn(page: Page, who: { email: string; password: string }) {
   await page.goto("/sign-in");
@@ -56,7 +57,7 @@ describe("team workspace: revisions, review, share link", () => {
     await browser?.close();
   });
 
-  it("saves two revisions, gets a verdict with mail, and shares then revokes a link", async () => {
+  it("saves revisions, gets a verdict with mail, shares and revokes a link, survives a save race", async () => {
     const ed = await (await newContext(browser)).newPage();
     await signIn(ed, editor);
 
@@ -148,5 +149,34 @@ describe("team workspace: revisions, review, share link", () => {
     await late.getByRole("heading", { name: "No longer available" }).waitFor();
     expect(await late.content()).not.toContain(scenarioName);
     await screenshot(late, "workspace-07-share-revoked");
+
+    // Two saves from the same base: the owner's lands first, the editor's answers 409, keeps
+    // the edits, shows the other revision beside them and then saves on top.
+    await ed.goto(scenarioPath);
+    await curveDrawn(ed);
+    await ed.locator("#param-A-Y0_2").fill("0.06");
+    await ed.getByRole("button", { name: "Save revision", exact: true }).click();
+    const own = await (await newContext(browser)).newPage();
+    await signIn(own, owner);
+    await own.goto(scenarioPath);
+    await curveDrawn(own);
+    await own.locator("#param-A-a1").fill("0.7");
+    await own.getByRole("button", { name: "Save revision", exact: true }).click();
+    await own.getByRole("button", { name: "Save new revision" }).click();
+    await eventually(() => revisionLine(own)).toContain("Revision 3 of 3");
+
+    await ed.getByLabel("What changed (revision message)").fill("Y0_2 to 0.06");
+    await ed.getByRole("button", { name: "Save new revision" }).click();
+    const clash = ed.getByRole("alert").filter({ hasText: "was saved while you were editing" });
+    await eventually(() => clash.textContent()).toContain("Olga Owner");
+    expect(await ed.locator("#param-A-Y0_2").inputValue()).toBe("0.06");
+    await ed.getByRole("button", { name: "Review revision 3 beside my edits" }).click();
+    await eventually(() => clash.getByTestId("revision-diff").textContent()).toContain("Y0_2");
+    expect(await clash.getByTestId("revision-diff").textContent()).toContain("a1");
+    await screenshot(ed, "workspace-08-save-conflict");
+    await ed.getByRole("button", { name: "Save as revision 4" }).click();
+    await eventually(() => revisionLine(ed)).toContain("Revision 4 of 4");
+    expect(await ed.locator("#param-A-Y0_2").inputValue()).toBe("0.06");
+    expect(await revisionLine(ed)).toContain("Y0_2 to 0.06");
   });
 });
