@@ -11,9 +11,15 @@ import { hashPassword } from "@/lib/auth/password";
 export const BENCH_SCENARIOS = 10_000;
 export const REVISIONS_PER_SCENARIO = 10;
 
+/**
+ * Requests are spread over this many signed-in editors: the API counts requests per person
+ * (lib/api/token-route.ts), and one shared session would measure that limiter instead.
+ */
+export const BENCH_USERS = 200;
+
 export interface BenchSeed {
   teamSlug: string;
-  userId: string;
+  userIds: string[];
 }
 
 /**
@@ -37,7 +43,15 @@ export async function seedBench(db: Db): Promise<BenchSeed> {
     .insert(teams)
     .values({ slug: "bench", name: "Bench team" })
     .returning({ id: teams.id, slug: teams.slug });
-  await db.insert(memberships).values({ teamId: team.id, userId: user.id, role: "editor" });
+  const others = await db.execute<{ id: string }>(sql`
+    insert into users (email, name, password_hash, password_salt, verified_at)
+    select 'bench-' || i || '@bench.craquelure.local', 'Bench editor ' || i, ${hash}, ${salt}, now()
+    from generate_series(2, ${BENCH_USERS}) as i
+    returning id`);
+  const userIds = [user.id, ...others.map((r) => r.id)];
+  await db
+    .insert(memberships)
+    .values(userIds.map((userId) => ({ teamId: team.id, userId, role: "editor" as const })));
 
   await db.execute(sql`
     insert into scenarios (team_id, name, material_label, tags, created_by, latest_revision, created_at, updated_at)
@@ -58,7 +72,7 @@ export async function seedBench(db: Db): Promise<BenchSeed> {
     from scenario_revisions r
     where r.scenario_id = s.id and r.number = s.latest_revision and r.review_state <> 'draft'`);
   await db.execute(sql`analyze`);
-  return { teamSlug: team.slug, userId: user.id };
+  return { teamSlug: team.slug, userIds };
 }
 
 /** Scenario ids in a fixed order, for the save phase to spread its writes over. */

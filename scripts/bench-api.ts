@@ -57,9 +57,16 @@ async function main() {
     console.log(
       `seeded ${ids.length} scenarios × ${REVISIONS_PER_SCENARIO} revisions in ${((Date.now() - t) / 1000).toFixed(1)} s`,
     );
-    // The cookie a sign-in would set: a lucia session for the bench editor.
-    const session = await createLucia(db, { secureCookies: false }).createSession(seed.userId, {});
-    const cookie = `${SESSION_COOKIE}=${session.id}`;
+    // The cookies a sign-in would set: one lucia session per bench editor; request i goes out
+    // with editor i's session (round robin).
+    const lucia = createLucia(db, { secureCookies: false });
+    const cookies: string[] = [];
+    for (const userId of seed.userIds) {
+      cookies.push(`${SESSION_COOKIE}=${(await lucia.createSession(userId, {})).id}`);
+    }
+    const cookie = cookies[0];
+    let sent = 0;
+    const nextCookie = () => cookies[sent++ % cookies.length];
     const listUrl = `${BASE}/api/v1/teams/${seed.teamSlug}/scenarios`;
 
     t = Date.now();
@@ -68,7 +75,12 @@ async function main() {
     console.log(`next start ready in ${((Date.now() - t) / 1000).toFixed(1)} s on ${BASE}`);
     await measure(
       "warm-up",
-      { url: listUrl, connections: 10, duration: 3, headers: { cookie } },
+      {
+        url: listUrl,
+        connections: 10,
+        duration: 3,
+        requests: [{ setupRequest: (req) => ({ ...req, headers: { cookie: nextCookie() } }) }],
+      },
       app.pid,
     );
 
@@ -80,13 +92,13 @@ async function main() {
         url: listUrl,
         connections: CONNECTIONS,
         duration: SECONDS,
-        headers: { cookie },
         requests: [
           {
             setupRequest: (req) => {
               const i = listIndex++;
               return {
                 ...req,
+                headers: { cookie: nextCookie() },
                 path: `${new URL(listUrl).pathname}?page=${1 + (i % 40)}&pageSize=25&sort=${sorts[i % sorts.length]}`,
               };
             },
@@ -109,7 +121,6 @@ async function main() {
         connections: CONNECTIONS,
         duration: SECONDS,
         method: "POST",
-        headers: { cookie, "content-type": "application/json" },
         requests: [
           {
             setupRequest: (req) => {
@@ -119,6 +130,7 @@ async function main() {
               return {
                 ...req,
                 method: "POST",
+                headers: { cookie: nextCookie(), "content-type": "application/json" },
                 path: `/api/v1/teams/${seed.teamSlug}/scenarios/${scenario}/revisions`,
                 body: JSON.stringify({ baseRevision: base, message: `bench save ${i}`, file }),
               };
