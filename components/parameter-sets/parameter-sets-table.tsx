@@ -3,8 +3,8 @@
 import { useState } from "react";
 
 import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { formatValue, formatWhen, personName } from "@/lib/workspace-client/format";
-import { keyValues, provenanceText } from "@/lib/workspace-client/parameter-set-words";
+import { formatWhen, personName } from "@/lib/workspace-client/format";
+import { allValues, keyValues, provenanceText } from "@/lib/workspace-client/parameter-set-words";
 import type { ParameterSetListResponse } from "@/lib/workspace-client/types";
 import { useDeleteParameterSet, useParameterSets } from "@/lib/workspace-client/use-parameter-sets";
 
@@ -105,11 +105,11 @@ function ParameterSetRow({ slug, set, canEdit, open, onToggle, onDelete }: Param
       {open ? (
         <tr className="border-b border-glaze-line/70 bg-glaze-deep/30">
           <td colSpan={5} className="px-3 py-2">
-            <dl className="grid grid-cols-2 gap-x-6 gap-y-1 font-mono text-xs sm:grid-cols-4 lg:grid-cols-6">
-              {Object.entries(set.values).map(([k, v]) => (
-                <div key={k} className="flex justify-between gap-2">
-                  <dt className="text-ink-soft">{k}</dt>
-                  <dd>{formatValue(v)}</dd>
+            <dl className="grid grid-cols-2 gap-x-6 gap-y-1 font-mono text-xs sm:grid-cols-3 lg:grid-cols-4">
+              {allValues(set.values).map((v) => (
+                <div key={v.symbol} className="flex justify-between gap-2">
+                  <dt className="text-ink-soft">{v.symbol}</dt>
+                  <dd>{v.text}</dd>
                 </div>
               ))}
             </dl>

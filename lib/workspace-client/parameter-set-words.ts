@@ -1,3 +1,5 @@
+import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+
 import { formatValue } from "./format";
 
 /** The values a table row shows: stiffness, thresholds and the critical damage. */
@@ -22,4 +24,26 @@ export function provenanceText(p: ProvenanceLike): string {
   }
   if (p.kind === "constituents") return "derived from constituents";
   return "typed in";
+}
+
+/** A field's unit for this set: the growth slopes' unit depends on the law. */
+function unitOf(unit: string, law: unknown): string {
+  if (unit === "–") return "";
+  if (unit.includes("(sqrtY)")) return law === "linY" ? "MPa^-1" : "MPa^-0.5";
+  return unit;
+}
+
+/** Every value of a set in the law's order, with its unit; fields the law does not know last. */
+export function allValues(values: Record<string, unknown>): { symbol: string; text: string }[] {
+  const known = PARAMETER_FIELDS.filter((f) => f.symbol in values).map((f) => {
+    const value = values[f.symbol];
+    const unit = typeof value === "number" ? unitOf(f.unit, values.law) : "";
+    return { symbol: f.symbol, text: `${formatValue(value)}${unit ? ` ${unit}` : ""}` };
+  });
+  const knownSymbols = new Set(PARAMETER_FIELDS.map((f) => f.symbol));
+  const rest = Object.keys(values)
+    .filter((k) => !knownSymbols.has(k) && k !== "label" && k !== "id")
+    .sort()
+    .map((k) => ({ symbol: k, text: formatValue(values[k]) }));
+  return [...known, ...rest];
 }
