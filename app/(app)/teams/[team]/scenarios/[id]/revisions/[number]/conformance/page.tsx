@@ -1,0 +1,143 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+
+import { ConformanceResultTable } from "@/components/conformance/result-table";
+import { ConformanceUploadForm } from "@/components/conformance/upload-form";
+import { CurveChart } from "@/components/records/curve-chart";
+import { Cautions } from "@/components/workbench/cautions";
+import { getDb } from "@/db/index";
+import { can } from "@/lib/auth/permissions";
+import { requireTeamRole } from "@/lib/auth/guard";
+import { conformanceTraces } from "@/lib/conformance/curves";
+import { listConformanceChecks, loadConformanceCheck } from "@/lib/conformance/service";
+import { isAppError } from "@/lib/errors";
+import { parseScenarioFileOrThrow } from "@/lib/workspace/parse";
+import { revisionInTeam } from "@/lib/workspace/scope";
+
+export const metadata: Metadata = { title: "Conformance check" };
+
+type Params = { team: string; id: string; number: string };
+
+async function orNotFound<T>(promise: Promise<T>): Promise<T> {
+  try {
+    return await promise;
+  } catch (error) {
+    if (isAppError(error)) notFound();
+    throw error;
+  }
+}
+
+export default async function ConformancePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<Params>;
+  searchParams: Promise<{ check?: string }>;
+}) {
+  const { team, id, number } = await params;
+  const { check } = await searchParams;
+  const ctx = await requireTeamRole(team, "team:read");
+  const db = getDb();
+  const ref = { teamSlug: team, scenarioId: id, number };
+  const { scenario, revision } = await orNotFound(revisionInTeam(db, ctx.team.id, id, number));
+  const setIds = parseScenarioFileOrThrow(revision.file).parameterSets.map((s) => s.id);
+  const { items } = await listConformanceChecks(db, ctx.actor, ref);
+  const shown = check ? await orNotFound(loadConformanceCheck(db, ctx.actor, ref, check)) : null;
+  const base = `/teams/${team}/scenarios/${id}/revisions/${number}`;
+  const traces = shown
+    ? conformanceTraces(
+        shown.curves.history,
+        shown.curves.columns,
+        shown.curves.rowOf,
+        shown.result.quantities.map((q) => q.quantity),
+      )
+    : null;
+  return (
+    <div className="space-y-6">
+      <p className="text-sm">
+        <Link
+          className="text-verdigris-dark hover:underline"
+          href={`/teams/${team}/scenarios/${id}`}
+        >
+          {scenario.name}
+        </Link>{" "}
+        · revision {revision.number}
+      </p>
+      <h1 className="font-display text-2xl font-semibold">Conformance check</h1>
+      <p className="text-sm text-ink-soft">
+        Upload the single-point history your finite-element implementation of this law wrote. Its
+        strains are replayed through Craquelure&apos;s driver and every quantity is compared.
+      </p>
+      {can(ctx.role, "scenario:edit") ? (
+        <ConformanceUploadForm
+          apiUrl={`/api/v1${base}/conformance`}
+          pageUrl={`${base}/conformance`}
+          setIds={setIds}
+        />
+      ) : null}
+      <table className="w-full text-sm" data-testid="conformance-checks">
+        <thead className="text-left text-ink-faint">
+          <tr>
+            <th className="py-1">When</th>
+            <th>File</th>
+            <th>Set</th>
+            <th>Verdict</th>
+            <th>First increment beyond</th>
+            <th>By</th>
+          </tr>
+        </thead>
+        <tbody>
+          {items.map((c) => (
+            <tr key={c.id} className="border-t border-glaze-line">
+              <td className="py-1">
+                <Link
+                  className="text-verdigris-dark hover:underline"
+                  href={`${base}/conformance?check=${c.id}`}
+                >
+                  {c.createdAt.toISOString().slice(0, 16).replace("T", " ")}
+                </Link>
+              </td>
+              <td>{c.fileName}</td>
+              <td>{c.setId}</td>
+              <td className={c.passed ? "text-verdigris-dark" : "text-kiln-dark"}>
+                {c.passed ? "pass" : "fail"}
+              </td>
+              <td>{c.firstFailStep ?? "—"}</td>
+              <td>{c.author ?? "former member"}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {shown && traces ? (
+        <section className="space-y-4" aria-label="Selected check">
+          <h2 className="font-display text-xl font-semibold">
+            {shown.row.fileName}: {shown.result.passed ? "pass" : "fail"}
+          </h2>
+          <ConformanceResultTable result={shown.result} />
+          <a
+            className="text-sm text-verdigris-dark hover:underline"
+            href={`/api/v1${base}/conformance/${shown.row.id}/csv`}
+          >
+            Download the comparison (CSV)
+          </a>
+          <div className="grid gap-6 lg:grid-cols-2">
+            <CurveChart
+              testId="conformance-curves"
+              traces={traces.curves}
+              xTitle="increment"
+              yTitle="value (MPa or –)"
+            />
+            <CurveChart
+              testId="conformance-differences"
+              traces={traces.differences}
+              xTitle="increment"
+              yTitle="uploaded − Craquelure"
+            />
+          </div>
+        </section>
+      ) : null}
+      <Cautions />
+    </div>
+  );
+}
