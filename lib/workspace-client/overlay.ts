@@ -21,8 +21,15 @@ function relabel(rev: NumberedScenario): ParameterSet[] {
  * both, each labelled "rev N · set" so the curves say where they come from. When the paths
  * differ, the overlay runs both sets on the base's path; the page says so.
  */
-export function overlayRevisions(base: NumberedScenario, other: NumberedScenario): OpenedScenario {
+export function overlayRevisions(
+  base: NumberedScenario & { workbench?: unknown },
+  other: NumberedScenario,
+): OpenedScenario {
+  // The base's path text (repeat blocks and comments) still describes the same legs; the
+  // hidden-set list does not apply to the relabelled ids.
+  const pathText = (base.workbench as { pathText?: unknown } | undefined)?.pathText;
   return {
+    workbench: typeof pathText === "string" ? { pathText, hidden: [] } : undefined,
     format: base.scenario.format,
     name: `${base.scenario.name} — rev ${base.number} over rev ${other.number}`.slice(0, 500),
     parameterSets: [...relabel(base), ...relabel(other)],

@@ -23,6 +23,17 @@ describe("overlay of two revisions", () => {
     expect(new Set(merged.parameterSets.map((s) => s.id)).size).toBe(2);
     expect(parseScenarioFile(merged).ok).toBe(true);
     expect(samePath(a, b)).toBe(true);
+    expect(merged.workbench).toBeUndefined();
+  });
+
+  it("keeps the base's path text so repeat blocks stay readable", () => {
+    const a = scenarioWith("SMC", 11000);
+    const text = "repeat 2 grow 1\n  e11=0.2% in 60\n  s11=0 in 60\nend\n";
+    const merged = overlayRevisions(
+      { number: 3, scenario: a, workbench: { pathText: text, hidden: ["A"] } },
+      { number: 2, scenario: a },
+    );
+    expect(merged.workbench).toEqual({ pathText: text, hidden: [] });
   });
 });
 

@@ -39,7 +39,7 @@ export default async function ScenarioPage({
   const editable = can(ctx.role, "scenario:edit") && number === latest && !other;
   const file = other
     ? overlayRevisions(
-        { number, scenario: current.scenario },
+        { number, scenario: current.scenario, workbench: current.opened.workbench },
         { number: overlay!, scenario: other.scenario },
       )
     : current.opened;
