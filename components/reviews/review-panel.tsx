@@ -94,18 +94,18 @@ export function ReviewPanel(props: ReviewPanelProps) {
                 </button>
               ))}
             </div>
-            {act.isError ? (
-              <p role="alert" className="text-kiln-dark">
-                {messageOf(act.error)}
-              </p>
-            ) : null}
-            {act.isSuccess && act.data.notified > 0 ? (
-              <p role="status" className="text-verdigris-dark">
-                {act.data.notified === 1 ? "One person was" : `${act.data.notified} people were`}{" "}
-                told by e-mail.
-              </p>
-            ) : null}
           </form>
+        ) : null}
+        {act.isError ? (
+          <p role="alert" className="text-kiln-dark">
+            {messageOf(act.error)}
+          </p>
+        ) : null}
+        {act.isSuccess && act.data.notified > 0 ? (
+          <p role="status" className="text-verdigris-dark">
+            {act.data.notified === 1 ? "One person was" : `${act.data.notified} people were`} told
+            by e-mail.
+          </p>
         ) : null}
         {review.data?.history.length ? (
           <ol className="space-y-1 border-l-2 border-glaze-line pl-3" aria-label="Review history">

@@ -52,6 +52,12 @@ export function ScenarioHeader({ team, summary, meta, latest }: ScenarioHeaderPr
           saved by {personName(meta.author)} on {formatWhen(meta.createdAt)}
         </span>
         {meta.message ? <span className="italic">“{meta.message}”</span> : null}
+        <a href="#review-title" className="text-verdigris-dark hover:underline">
+          Review and comments
+        </a>
+        <a href="#revisions-title" className="text-verdigris-dark hover:underline">
+          History
+        </a>
       </p>
     </header>
   );

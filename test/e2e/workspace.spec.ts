@@ -114,6 +114,8 @@ describe("team workspace: revisions, review, share link", () => {
     await rv.getByLabel("Note with the verdict (optional)").fill("Fine for the crash deck.");
     await rv.getByRole("button", { name: "Approve" }).click();
     await eventually(() => rv.getByTestId("review-summary").textContent()).toContain("Approved");
+    await eventually(() => revisionLine(rv)).toContain("Approved");
+    await curveDrawn(rv);
     await screenshot(rv, "workspace-04-reviewer-approved");
 
     // The editor sees the verdict and has the mail.
