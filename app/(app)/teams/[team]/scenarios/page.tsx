@@ -3,6 +3,7 @@ import Link from "next/link";
 
 import { QueryProvider } from "@/components/providers/query-provider";
 import { ScenariosTable } from "@/components/scenarios/scenarios-table";
+import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
 import { listScenariosForTeam } from "@/db/queries/scenarios";
 import { requireTeamRole } from "@/lib/auth/guard";
@@ -62,6 +63,28 @@ export default async function ScenariosPage({
           />
         </QueryProvider>
       </section>
+      {can(ctx.role, "export") ? (
+        <section
+          aria-labelledby="export-title"
+          className="mt-10 space-y-2 border-t border-glaze-line pt-4"
+        >
+          <h2 id="export-title" className="font-display text-base font-semibold">
+            Export
+          </h2>
+          <p className="text-sm text-ink-soft">
+            One JSON file with every scenario, revision, parameter set, comment and review of this
+            team, for archiving or to load into a new team.{" "}
+            <a
+              href={`/api/v1/teams/${encodeURIComponent(ctx.team.slug)}/export?download=1`}
+              className="text-verdigris-dark hover:underline"
+              download
+            >
+              Download the team export
+            </a>
+          </p>
+          <Cautions compact />
+        </section>
+      ) : null}
     </>
   );
 }
