@@ -1,0 +1,9 @@
+import { tokenRoute } from "@/lib/api/token-route";
+import { getStudy } from "@/lib/studies/service";
+
+type Params = { team: string; study: string };
+
+/** team:read → progress: total, done, failed, state, and each set's state and failure reason. */
+export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
+  getStudy(db, actor, params.team, params.study),
+);

@@ -1,0 +1,13 @@
+import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { Created } from "@/lib/api/route";
+import { tokenRoute } from "@/lib/api/token-route";
+import { getStudyQueue } from "@/lib/studies/app-queue";
+import { submitStudy } from "@/lib/studies/service";
+
+type Params = { team: string };
+
+/** fit:run; body StudyRequest → 201 { id, total }: one queue job per parameter set. */
+export const POST = tokenRoute<Params>("fit:run", async ({ db, actor, params, request }) => {
+  const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  return new Created(await submitStudy(db, getStudyQueue, actor, params.team, body));
+});
