@@ -58,6 +58,12 @@ export function ScenarioHeader({ team, summary, meta, latest }: ScenarioHeaderPr
         <a href="#revisions-title" className="text-verdigris-dark hover:underline">
           History
         </a>
+        <Link
+          href={`/teams/${team.slug}/scenarios/${summary.id}/revisions/${meta.number}/conformance`}
+          className="text-verdigris-dark hover:underline"
+        >
+          Conformance checks
+        </Link>
       </p>
     </header>
   );
