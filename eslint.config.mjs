@@ -9,6 +9,7 @@ const config = [
       ".next/**",
       ".next-test/**",
       ".next-bench/**",
+      ".next-load/**",
       "node_modules/**",
       ".data/**",
       ".test-data/**",

@@ -1,9 +1,11 @@
 import { NextResponse, type NextRequest } from "next/server";
 
 import { isCrossOriginWrite } from "@/lib/origin-check";
+import { newNonce, securityHeaders } from "@/lib/security/headers";
 
-// Next 16's middleware file. Its only job: refuse state-changing requests from other origins.
-// Sessions and team access are checked where the data is read (pages, actions, routes).
+// Next 16's middleware file. Two jobs, both from headers alone (no database work here):
+// refuse state-changing requests from other origins, and attach the security headers with a
+// per-request script nonce. Sessions and team access are checked where the data is read.
 export function proxy(request: NextRequest) {
   const refuse = isCrossOriginWrite({
     method: request.method,
@@ -11,16 +13,25 @@ export function proxy(request: NextRequest) {
     origin: request.headers.get("origin"),
     referer: request.headers.get("referer"),
   });
+  const headers = securityHeaders({
+    nonce: newNonce(),
+    dev: process.env.NODE_ENV === "development",
+  });
   if (refuse) {
     return new NextResponse("Cross-origin request refused.", {
       status: 403,
-      headers: { "content-type": "text/plain; charset=utf-8" },
+      headers: { "content-type": "text/plain; charset=utf-8", ...headers },
     });
   }
-  return NextResponse.next();
+  // Next reads the policy from the request to find the nonce for the scripts it renders.
+  const requestHeaders = new Headers(request.headers);
+  requestHeaders.set("content-security-policy", headers["content-security-policy"]);
+  const response = NextResponse.next({ request: { headers: requestHeaders } });
+  for (const [name, value] of Object.entries(headers)) response.headers.set(name, value);
+  return response;
 }
 
 export const config = {
-  // Static assets never change state; skip them.
+  // Static assets never change state and run no inline script; skip them.
   matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg|fonts/).*)"],
 };
