@@ -1,3 +1,4 @@
+import { classifyDbError, DB_UNAVAILABLE_MESSAGE } from "@/lib/db-errors";
 import { isAppError, MASKED_MESSAGE } from "@/lib/errors";
 import { DetailedAppError } from "@/lib/workspace/errors";
 
@@ -36,6 +37,28 @@ export function errorResponse(error: unknown): Response {
     if (error.field) body.error.path = error.field;
     if (error instanceof DetailedAppError) Object.assign(body.error, error.details);
     return jsonResponse(body, statusOf(error.code));
+  }
+  const db = classifyDbError(error);
+  if (db?.kind === "unavailable") {
+    // An outage, not a bug: one line in the log, and the client is told when to come back.
+    console.error("[api] database unavailable:", (error as Error)?.message);
+    const response = jsonResponse(
+      { error: { code: "unavailable:database", message: DB_UNAVAILABLE_MESSAGE } },
+      503,
+    );
+    response.headers.set("retry-after", String(db.retryAfterSeconds));
+    return response;
+  }
+  if (db?.kind === "bad-text") {
+    return jsonResponse(
+      {
+        error: {
+          code: "invalid:text",
+          message: "The request contains a character that cannot be stored (a NUL byte).",
+        },
+      },
+      400,
+    );
   }
   console.error("[api unexpected]", error);
   return jsonResponse({ error: { code: "internal", message: MASKED_MESSAGE } }, 500);

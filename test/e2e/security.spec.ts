@@ -127,4 +127,24 @@ describe("security headers and hostile text", () => {
     expect(seen.dialogs).toEqual([]);
     await context.close();
   });
+
+  it("refuses a session cookie that was used again after signing out", async () => {
+    const context = await newContext(browser);
+    const page = await context.newPage();
+    await page.goto("/sign-in");
+    await page.getByLabel("E-mail address").fill("viewer@demo.craquelure.local");
+    await page.getByLabel("Password").fill("demo-viewer-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(/\/teams/);
+    const cookie = (await context.cookies()).map((c) => `${c.name}=${c.value}`).join("; ");
+    const list = `${baseUrl()}/api/v1/teams/${TEAM}/scenarios`;
+    expect((await fetch(list, { headers: { cookie } })).status).toBe(200);
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL(/sign-in/);
+    // The old cookie, replayed by someone who copied it, no longer opens anything.
+    const replay = await fetch(list, { headers: { cookie } });
+    expect(replay.status).toBe(401);
+    expect((await replay.json()).error.code).toBe("unauthenticated");
+    await context.close();
+  });
 });
