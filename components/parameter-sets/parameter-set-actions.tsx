@@ -3,6 +3,7 @@
 import { useState } from "react";
 
 import { messageOf } from "@/lib/workspace-client/api-fetch";
+import { sandboxLinkForSet } from "@/lib/workspace-client/sandbox-link";
 import type { ParameterSetView } from "@/lib/workspace-client/types";
 import { useRenameParameterSet } from "@/lib/workspace-client/use-parameter-sets";
 
@@ -75,6 +76,13 @@ export function ParameterSetActions(props: ParameterSetActionsProps) {
       <button type="button" onClick={props.onToggle} className={LINK} aria-expanded={props.open}>
         {props.open ? "Close" : "Open"}
       </button>
+      <a
+        href={sandboxLinkForSet(set.name, set.values)}
+        className={LINK}
+        title="Opens the set on the growing-cycles path in the sandbox; nothing is saved"
+      >
+        Try in the sandbox
+      </a>
       {canEdit ? (
         <>
           <button type="button" onClick={() => setMode("rename")} className={LINK}>

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { QueryProvider } from "@/components/providers/query-provider";
 import { ReviewPanel } from "@/components/reviews/review-panel";
 import { RevisionHistory } from "@/components/scenarios/revision-history";
+import { ScenarioDetailsEditor } from "@/components/scenarios/scenario-details-editor";
 import { ScenarioEditorLoader } from "@/components/scenarios/scenario-editor-loader";
 import { ScenarioHeader } from "@/components/scenarios/scenario-header";
 import { ShareLinksPanel } from "@/components/share/share-links-panel";
@@ -53,6 +54,16 @@ export default async function ScenarioPage({
         meta={meta}
         latest={latest}
       />
+      {can(ctx.role, "scenario:edit") ? (
+        <ScenarioDetailsEditor
+          slug={ctx.team.slug}
+          scenarioId={summary.id}
+          name={summary.name}
+          materialLabel={summary.materialLabel}
+          tags={summary.tags}
+          revisions={latest}
+        />
+      ) : null}
       {number !== latest && !other ? (
         <p role="status" className="mb-3 rounded-md bg-amber-50 px-3 py-2 text-sm text-amber-900">
           You are looking at revision {number}, read-only. The newest is revision {latest}:{" "}
