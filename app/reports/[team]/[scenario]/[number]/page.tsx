@@ -1,0 +1,119 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import type { ReactNode } from "react";
+
+import { ConformanceSummary } from "@/components/report/conformance-summary";
+import { ParameterTable } from "@/components/report/parameter-table";
+import { PrintButton } from "@/components/report/print-button";
+import { ProvenanceList } from "@/components/report/provenance-list";
+import { ReviewSection } from "@/components/report/review-section";
+import { SvgChart } from "@/components/report/svg-chart";
+import { CAUTION_TEXT } from "@/components/workbench/cautions";
+import { getDb } from "@/db/index";
+import { getActor } from "@/lib/auth/session";
+import { isAppError } from "@/lib/errors";
+import { loadCalibrationReport } from "@/lib/report/load-report";
+
+export const metadata: Metadata = { title: "Calibration report" };
+
+type Params = { team: string; scenario: string; number: string };
+
+function Section({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <section className="mt-6 break-inside-avoid-page">
+      <h2 className="mb-2 border-b border-ink font-display text-lg font-semibold">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+async function load(p: Params) {
+  const actor = await getActor();
+  if (!actor)
+    redirect(`/sign-in?next=${encodeURIComponent(`/reports/${p.team}/${p.scenario}/${p.number}`)}`);
+  try {
+    return await loadCalibrationReport(getDb(), actor, p.team, p.scenario, p.number);
+  } catch (error) {
+    if (isAppError(error)) notFound();
+    throw error;
+  }
+}
+
+/** A print-friendly calibration report of one revision: no navigation, static charts, A4 margins. */
+export default async function CalibrationReportPage({ params }: { params: Promise<Params> }) {
+  const report = await load(await params);
+  const { revision, scenario, file } = report;
+  return (
+    <main
+      id="main"
+      className="mx-auto max-w-4xl bg-white px-8 py-6 text-ink print:max-w-none print:p-0"
+    >
+      <style>{"@page { size: A4; margin: 16mm 14mm; }"}</style>
+      <div className="flex items-start justify-between gap-4">
+        <div>
+          <p className="text-xs uppercase tracking-wide text-ink-faint">
+            Craquelure calibration report
+          </p>
+          <h1 className="font-display text-2xl font-semibold">{scenario.name}</h1>
+          <p className="text-sm text-ink-soft">
+            {report.team.name} · revision {revision.number} · saved{" "}
+            {revision.createdAt.slice(0, 10)} by {revision.author?.name ?? "former member"}
+            {revision.message ? ` · “${revision.message}”` : ""}
+          </p>
+        </div>
+        <PrintButton />
+      </div>
+      <p role="note" className="mt-4 border border-kiln px-3 py-2 text-sm">
+        <strong>Caution.</strong> {CAUTION_TEXT}
+      </p>
+      <Section title="Review">
+        <ReviewSection report={report} />
+      </Section>
+      <Section title="Parameters">
+        <ParameterTable sets={file.parameterSets} />
+      </Section>
+      <Section title="Provenance, test records and fit quality">
+        <ProvenanceList items={report.provenance} />
+      </Section>
+      <Section title="Key curves">
+        <div className="grid grid-cols-2 gap-4">
+          <SvgChart
+            title="Scenario path: sig11 against eps11"
+            chart={report.charts.stressStrain}
+            xTitle="eps11 (mm/mm)"
+            yTitle="sig11 (MPa)"
+          />
+          <SvgChart
+            title="Scenario path: damage against increment"
+            chart={report.charts.damage}
+            xTitle="increment"
+            yTitle="d (–)"
+          />
+          <SvgChart
+            title="Uniaxial tension along 1 (reference case)"
+            chart={report.charts.tension}
+            xTitle="eps11 (mm/mm)"
+            yTitle="sig11 (MPa)"
+          />
+        </div>
+        <ul className="mt-2 text-xs text-ink-soft">
+          {report.statuses.map((s) => (
+            <li key={s.setId}>
+              Set {s.setId} on the scenario path:{" "}
+              {s.failed
+                ? `fails (${s.failMode}) at increment ${s.stoppedAtStep ?? "—"}`
+                : "runs to the end without failure"}
+              {s.warnings.length > 0 ? `; ${s.warnings.join("; ")}` : ""}
+            </li>
+          ))}
+        </ul>
+      </Section>
+      <Section title="Conformance checks">
+        <ConformanceSummary checks={report.checks} />
+      </Section>
+      <p className="mt-8 border-t border-glaze-line pt-2 text-xs text-ink-faint">
+        Generated {new Date().toISOString().slice(0, 16).replace("T", " ")} UTC. {CAUTION_TEXT}
+      </p>
+    </main>
+  );
+}

@@ -1,0 +1,35 @@
+import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
+
+/** Every parameter of every set with its unit: the table the simulation team types in. */
+export function ParameterTable({ sets }: { sets: ParameterSet[] }) {
+  return (
+    <table className="w-full border-collapse text-sm" data-testid="report-parameters">
+      <thead>
+        <tr className="border-b border-ink text-left">
+          <th className="py-1">Parameter</th>
+          <th>Unit</th>
+          {sets.map((s) => (
+            <th key={s.id} className="text-right">
+              Set {s.id}
+              {s.label ? <span className="block text-xs font-normal">{s.label}</span> : null}
+            </th>
+          ))}
+        </tr>
+      </thead>
+      <tbody>
+        {PARAMETER_FIELDS.map((f) => (
+          <tr key={f.symbol} className="border-b border-glaze-line">
+            <td className="py-0.5 font-mono">{f.symbol}</td>
+            <td>{f.unit}</td>
+            {sets.map((s) => (
+              <td key={s.id} className="text-right font-mono">
+                {String((s as unknown as Record<string, unknown>)[f.symbol] ?? "—")}
+              </td>
+            ))}
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

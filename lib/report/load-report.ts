@@ -1,0 +1,93 @@
+/** Everything the calibration report of one revision shows, read with team:read. */
+import type { Db } from "@/db/client";
+import { listConformanceChecksOfRevision } from "@/db/queries/conformance-checks";
+import { listFitsForTeam } from "@/db/queries/fits";
+import { listParameterSetsForTeam } from "@/db/queries/parameter-sets";
+import { findRevisionMeta, listReviewEvents } from "@/db/queries/revisions";
+import { listTestRecordsForTeam } from "@/db/queries/test-records";
+import type { Actor } from "@/lib/accounts/actor";
+import { standardLoadCases } from "@/lib/bundle/load-cases";
+import { runPath } from "@/lib/mechanics/driver";
+import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
+import { authorizeTeam } from "@/lib/teams/access";
+import { listComments } from "@/lib/workspace/comments";
+import { parseScenarioFileOrThrow } from "@/lib/workspace/parse";
+import { revisionInTeam } from "@/lib/workspace/scope";
+
+import { matchProvenance, type LibrarySet } from "./provenance";
+import { chartGeometry } from "./svg-chart";
+
+export async function loadCalibrationReport(
+  db: Db,
+  actor: Actor,
+  teamSlug: string,
+  scenarioId: unknown,
+  number: unknown,
+) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
+  const { scenario, revision } = await revisionInTeam(db, ctx.team.id, scenarioId, number);
+  const file = parseScenarioFileOrThrow(revision.file);
+  const [meta, reviews, comments, checks, library, fits, records] = await Promise.all([
+    findRevisionMeta(db, scenario.id, revision.number),
+    listReviewEvents(db, revision.id),
+    listComments(db, actor, teamSlug, scenario.id, revision.number),
+    listConformanceChecksOfRevision(db, revision.id),
+    listParameterSetsForTeam(db, ctx.team.id),
+    listFitsForTeam(db, ctx.team.id),
+    listTestRecordsForTeam(db, ctx.team.id),
+  ]);
+  const provenance = matchProvenance(
+    file.parameterSets,
+    library as unknown as LibrarySet[],
+    fits.map((f) => ({ ...f, residuals: f.residuals ?? [] })),
+    new Map(records.map((r) => [r.id, r.name])),
+  );
+  const runs = file.parameterSets.map((set) => ({
+    set,
+    run: runPath(toMaterialParams(set), file.path.legs),
+  }));
+  const stressStrain = chartGeometry(
+    runs.map(({ set, run }) => ({
+      name: set.id,
+      x: run.columns.eps11.subarray(0, run.rows),
+      y: run.columns.sig11.subarray(0, run.rows),
+    })),
+  );
+  const damage = chartGeometry(
+    runs.flatMap(({ set, run }) => [
+      {
+        name: `${set.id} d1`,
+        x: run.columns.step.subarray(0, run.rows),
+        y: run.columns.d1.subarray(0, run.rows),
+      },
+      {
+        name: `${set.id} d2`,
+        x: run.columns.step.subarray(0, run.rows),
+        y: run.columns.d2.subarray(0, run.rows),
+      },
+    ]),
+  );
+  const tension = chartGeometry(
+    file.parameterSets.map((set) => {
+      const run = runPath(toMaterialParams(set), standardLoadCases(set)[0].legs);
+      return {
+        name: set.id,
+        x: run.columns.eps11.subarray(0, run.rows),
+        y: run.columns.sig11.subarray(0, run.rows),
+      };
+    }),
+  );
+  return {
+    team: ctx.team,
+    scenario,
+    revision: meta!,
+    file,
+    provenance,
+    reviews,
+    comments: comments.items,
+    checks,
+    charts: { stressStrain, damage, tension },
+    statuses: runs.map(({ set, run }) => ({ setId: set.id, ...run.status })),
+  };
+}
+export type CalibrationReport = Awaited<ReturnType<typeof loadCalibrationReport>>;
