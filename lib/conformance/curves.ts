@@ -19,17 +19,19 @@ export function conformanceTraces(
   columns: ResultColumns,
   rowOf: Int32Array,
   quantities: ComparedQuantity[],
-): { curves: Trace[]; differences: Trace[] } {
+): { stresses: Trace[]; damage: Trace[]; differences: Trace[] } {
   const stride = Math.max(1, Math.ceil(history.rows / MAX_POINTS));
   const picks: number[] = [];
   for (let i = 0; i < history.rows; i += stride) if (rowOf[i] >= 0) picks.push(i);
   const x = picks.map((i) => (history.increment ? history.increment[i] : i));
-  const curves: Trace[] = [];
+  const stresses: Trace[] = [];
+  const damage: Trace[] = [];
   const differences: Trace[] = [];
   for (const q of quantities) {
     const theirs = history[q];
     if (!theirs) continue;
     const ours = columns[q];
+    const curves = q === "d1" || q === "d2" ? damage : stresses;
     curves.push({ name: `${q} uploaded`, x, y: picks.map((i) => theirs[i]) });
     curves.push({ name: `${q} Craquelure`, x, y: picks.map((i) => ours[rowOf[i]]), dash: true });
     differences.push({
@@ -38,5 +40,5 @@ export function conformanceTraces(
       y: picks.map((i) => theirs[i] - ours[rowOf[i]]),
     });
   }
-  return { curves, differences };
+  return { stresses, damage, differences };
 }

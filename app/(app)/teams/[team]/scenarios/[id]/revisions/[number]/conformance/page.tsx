@@ -124,10 +124,18 @@ export default async function ConformancePage({
           <div className="grid gap-6 lg:grid-cols-2">
             <CurveChart
               testId="conformance-curves"
-              traces={traces.curves}
+              traces={traces.stresses}
               xTitle="increment"
-              yTitle="value (MPa or –)"
+              yTitle="stress (MPa)"
             />
+            {traces.damage.length > 0 ? (
+              <CurveChart
+                testId="conformance-damage"
+                traces={traces.damage}
+                xTitle="increment"
+                yTitle="damage (–)"
+              />
+            ) : null}
             <CurveChart
               testId="conformance-differences"
               traces={traces.differences}
