@@ -8,16 +8,19 @@ import { Field, FieldError } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
 import type { Role } from "@/lib/auth/permissions";
+import { MAIL_QUEUED_NOTICE } from "@/lib/email/types";
 import { inviteSchema } from "@/lib/validations/teams";
 
 import { RoleSelect } from "./role-select";
 
 export function InviteForm({ teamSlug, roles }: { teamSlug: string; roles: readonly Role[] }) {
   const [sentTo, setSentTo] = useState<string>();
+  const [queued, setQueued] = useState(false);
   const { form, onSubmit } = useActionForm(inviteSchema, inviteAction, {
     defaultValues: { teamSlug, email: "", role: "viewer" },
-    onSuccess: () => {
+    onSuccess: (data) => {
       setSentTo(form.getValues("email"));
+      setQueued(data.mailQueued);
       form.reset({ teamSlug, email: "", role: form.getValues("role") });
     },
   });
@@ -25,7 +28,14 @@ export function InviteForm({ teamSlug, roles }: { teamSlug: string; roles: reado
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-3">
       {errors.root ? <FormMessage tone="error">{errors.root.message}</FormMessage> : null}
-      {sentTo ? <FormMessage tone="success">Invitation sent to {sentTo}.</FormMessage> : null}
+      {sentTo && !queued ? (
+        <FormMessage tone="success">Invitation sent to {sentTo}.</FormMessage>
+      ) : null}
+      {sentTo && queued ? (
+        <FormMessage tone="success">
+          Invitation for {sentTo} created. {MAIL_QUEUED_NOTICE}
+        </FormMessage>
+      ) : null}
       <input type="hidden" {...form.register("teamSlug")} />
       <div className="flex flex-wrap items-start gap-3">
         <Field

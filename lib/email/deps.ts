@@ -1,10 +1,15 @@
 import "server-only";
 
+import { getDb } from "@/db/index";
 import { getEnv } from "@/lib/env";
 
+import { durableMailer } from "./mail-outbox";
+import { startMailOutbox } from "./outbox-sender";
 import { smtpMailer } from "./transport";
 import type { MailDeps } from "./types";
 
+// The app's mailer: SMTP, with refused mail kept in mail_outbox and retried by the sender.
 export function mailDeps(): MailDeps {
-  return { mailer: smtpMailer, appUrl: getEnv().APP_URL };
+  startMailOutbox();
+  return { mailer: durableMailer(getDb(), smtpMailer, startMailOutbox), appUrl: getEnv().APP_URL };
 }

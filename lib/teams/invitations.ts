@@ -23,7 +23,7 @@ export async function inviteMember(
   input: unknown,
   deps: MailDeps,
   now: Date = new Date(),
-): Promise<Invitation> {
+): Promise<Invitation & { mailQueued: boolean }> {
   const data = parseInput(inviteSchema, input);
   const ctx = await authorizeTeam(db, actor, data.teamSlug, "member:invite");
   if (!canGrant(ctx.role, data.role)) {
@@ -74,7 +74,7 @@ export async function inviteMember(
     });
     return row;
   });
-  await deps.mailer.send(
+  const sent = await deps.mailer.send(
     invitationMessage({
       to: data.email,
       inviterName: ctx.actor.name,
@@ -83,5 +83,6 @@ export async function inviteMember(
       url: linkTo(deps.appUrl, `/invite/${token.token}`),
     }),
   );
-  return invitation;
+  // The invitation stands either way; a queued mail goes out when the mail server is back.
+  return { ...invitation, mailQueued: sent?.queued === true };
 }

@@ -32,6 +32,7 @@ export async function sendReviewMail(db: Db, deps: MailDeps, ctx: ReviewMailCont
     `/teams/${ctx.team.slug}/scenarios/${ctx.scenario.id}?rev=${ctx.revision}`,
   );
   let sent = 0;
+  let queued = 0;
   for (const person of people) {
     const base = {
       to: person.email,
@@ -46,11 +47,12 @@ export async function sendReviewMail(db: Db, deps: MailDeps, ctx: ReviewMailCont
       ? reviewRequestedMessage(base)
       : reviewVerdictMessage({ ...base, verdict: ctx.to as "approved" | "changes_requested" });
     try {
-      await deps.mailer.send(message);
-      sent++;
+      const result = await deps.mailer.send(message);
+      if (result?.queued) queued++;
+      else sent++;
     } catch (error) {
       console.error("[review mail] could not send to", person.email, error);
     }
   }
-  return { notified: sent, failed: people.length - sent };
+  return { notified: sent, queued, failed: people.length - sent - queued };
 }

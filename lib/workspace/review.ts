@@ -29,7 +29,8 @@ export interface ReviewHistoryResponse {
   revision: RevisionMeta;
   history: ReviewEventView[];
 }
-export type ReviewActionResponse = ReviewHistoryResponse & { notified: number };
+/** mailQueued: mails kept in the outbox because the mail server was down; sent when it is back. */
+export type ReviewActionResponse = ReviewHistoryResponse & { notified: number; mailQueued: number };
 
 // Editors send their work for review; reviewers (and owners) judge it.
 const TRANSITIONS: Record<
@@ -138,7 +139,7 @@ export async function changeReview(
     });
     return lastRequest?.actorId ?? null;
   });
-  const { notified } = await sendReviewMail(db, deps, {
+  const { notified, queued } = await sendReviewMail(db, deps, {
     team: ctx.team,
     scenario,
     revision: revision.number,
@@ -147,5 +148,9 @@ export async function changeReview(
     to: step.to,
     requesterId,
   });
-  return { ...(await reviewHistory(db, actor, teamSlug, scenario.id, revision.number)), notified };
+  return {
+    ...(await reviewHistory(db, actor, teamSlug, scenario.id, revision.number)),
+    notified,
+    mailQueued: queued,
+  };
 }

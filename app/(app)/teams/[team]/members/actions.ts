@@ -23,9 +23,10 @@ function refresh(input: unknown) {
   revalidatePath(`/teams/${slugOf(input)}/members`);
 }
 
-export async function inviteAction(input: unknown): Promise<ActionResult> {
+export async function inviteAction(input: unknown): Promise<ActionResult<{ mailQueued: boolean }>> {
   const result = await runAction(async () => {
-    await inviteMember(getDb(), await getActor(), input, mailDeps());
+    const invitation = await inviteMember(getDb(), await getActor(), input, mailDeps());
+    return { mailQueued: invitation.mailQueued };
   });
   if (result.ok) refresh(input);
   return result;
