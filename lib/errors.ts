@@ -1,3 +1,5 @@
+import { classifyDbError, DB_UNAVAILABLE_MESSAGE } from "./db-errors";
+
 // Two kinds of failure. An AppError is expected (bad input, not allowed, expired link): it
 // carries a stable code like "forbidden:team" and a message written for the user, optionally
 // tied to one form field. Anything else is a bug or an outage: logged in full, shown masked.
@@ -37,6 +39,11 @@ export const MASKED_MESSAGE = "Something went wrong on our side. Please try agai
 export function toActionError(error: unknown): Extract<ActionResult, { ok: false }> {
   if (isAppError(error)) {
     return { ok: false, code: error.code, message: error.message, field: error.field };
+  }
+  // An outage is not a bug: say so plainly, so the person waits instead of retyping.
+  if (classifyDbError(error)?.kind === "unavailable") {
+    console.error("[action] database unavailable:", (error as Error)?.message);
+    return { ok: false, code: "unavailable:database", message: DB_UNAVAILABLE_MESSAGE };
   }
   // Unexpected: keep the details in the server log only.
   console.error("[unexpected]", error);
