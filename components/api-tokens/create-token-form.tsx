@@ -4,7 +4,7 @@ import { useState } from "react";
 
 import { createApiTokenAction } from "@/app/(app)/account/api-token-actions";
 import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/permissions";
-import { roleAtMost } from "@/lib/api-tokens/roles";
+import { roleWithin } from "@/lib/api-tokens/roles";
 
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
@@ -62,7 +62,7 @@ export function CreateTokenForm({ teams }: CreateTokenFormProps) {
       <label className="text-sm font-medium">
         Role
         <select className={INPUT} value={role} onChange={(e) => setRole(e.target.value as Role)}>
-          {ROLES.filter((r) => roleAtMost(r, ceiling)).map((r) => (
+          {ROLES.filter((r) => roleWithin(r, ceiling)).map((r) => (
             <option key={r} value={r}>
               {ROLE_LABELS[r]}
             </option>

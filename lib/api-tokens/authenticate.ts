@@ -1,7 +1,7 @@
 /**
  * Bearer authentication for the public API. An unknown, malformed or revoked token, or one
- * whose owner has left the team, is 401. The token acts as its owner, with the lower of the
- * token's role and the owner's current role, and only in the token's team.
+ * whose owner has left the team, is 401. The token acts as its owner, only in the token's team,
+ * and only where both its role and the owner's current role allow (roles.ts tokenCan).
  */
 import type { Executor } from "@/db/client";
 import { findApiTokenByHash, touchApiToken } from "@/db/queries/api-tokens";
@@ -9,7 +9,6 @@ import type { SignedInActor } from "@/lib/accounts/actor";
 import type { Role } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 
-import { lowerRole } from "./roles";
 import { hashApiToken, looksLikeApiToken } from "./secret";
 
 export interface TokenPrincipal {
@@ -17,7 +16,10 @@ export interface TokenPrincipal {
   actor: SignedInActor;
   teamId: string;
   teamSlug: string;
+  /** The token's own role. */
   role: Role;
+  /** The owner's current role in the team. */
+  memberRole: Role;
 }
 
 const REJECTED = "The API token is not valid: it is unknown, revoked, or its owner left the team.";
@@ -42,6 +44,7 @@ export async function authenticateToken(
     actor: found.user,
     teamId: found.token.teamId,
     teamSlug: found.teamSlug,
-    role: lowerRole(found.token.role, found.memberRole),
+    role: found.token.role,
+    memberRole: found.memberRole,
   };
 }

@@ -13,7 +13,7 @@ import { authorizeTeam } from "@/lib/teams/access";
 import { requireUuid } from "@/lib/workspace/errors";
 import { parseWithPath } from "@/lib/workspace/parse";
 
-import { roleAtMost } from "./roles";
+import { roleWithin } from "./roles";
 import { createApiTokenSchema } from "./schema";
 import { newApiToken } from "./secret";
 
@@ -26,7 +26,7 @@ function requireActor(actor: Actor) {
 export async function createApiToken(db: Executor, actor: Actor, input: unknown) {
   const data = parseWithPath(createApiTokenSchema, input);
   const ctx = await authorizeTeam(db, requireActor(actor), data.team, "team:read");
-  if (!roleAtMost(data.role, ctx.role)) {
+  if (!roleWithin(data.role, ctx.role)) {
     throw new AppError(
       "forbidden:token-role",
       `As ${ROLE_LABELS[ctx.role].toLowerCase()} of this team you cannot give a token the ${ROLE_LABELS[data.role].toLowerCase()} role.`,

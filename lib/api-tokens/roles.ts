@@ -1,13 +1,14 @@
-import { ROLES, type Role } from "@/lib/auth/permissions";
+import { can, capabilitiesOf, type Capability, type Role } from "@/lib/auth/permissions";
 
-// ROLES lists the roles from most to least powerful; a token acts with the lower of its own
-// role and its owner's current role in the team.
-const rank = (role: Role) => ROLES.length - ROLES.indexOf(role);
+// Roles are not a ladder: a reviewer may give verdicts, an editor may not, and the reverse
+// for editing. So "no higher than yours" means: every capability of the token's role is one
+// the owner holds. At use, a token may do only what both its role and the owner's current
+// role allow.
 
-export function roleAtMost(role: Role, ceiling: Role): boolean {
-  return rank(role) <= rank(ceiling);
+export function roleWithin(role: Role, ceiling: Role): boolean {
+  return capabilitiesOf(role).every((capability) => can(ceiling, capability));
 }
 
-export function lowerRole(a: Role, b: Role): Role {
-  return rank(a) <= rank(b) ? a : b;
+export function tokenCan(tokenRole: Role, memberRole: Role, capability: Capability): boolean {
+  return can(tokenRole, capability) && can(memberRole, capability);
 }

@@ -5,7 +5,8 @@ import { getDb } from "@/db/index";
 import type { Actor } from "@/lib/accounts/actor";
 import { authenticateToken, type TokenPrincipal } from "@/lib/api-tokens/authenticate";
 import { bearerOf } from "@/lib/api-tokens/secret";
-import { can, type Capability } from "@/lib/auth/permissions";
+import { tokenCan } from "@/lib/api-tokens/roles";
+import type { Capability } from "@/lib/auth/permissions";
 import { AppError } from "@/lib/errors";
 import { hitRateLimit, type RateLimitRule } from "@/lib/rate-limit";
 import { NOT_FOUND_MESSAGE } from "@/lib/teams/access";
@@ -14,7 +15,7 @@ import { actorFromRequest } from "./request-actor";
 import { errorResponse, jsonResponse } from "./respond";
 import { Created, type RouteInput } from "./route";
 
-/** Per token (or per signed-in user without one): generous for scripts, a brake for loops. */
+/** Per token (and per signed-in user where a route asks): generous for scripts, a brake for loops. */
 export const API_RATE_LIMIT: RateLimitRule = { limit: 120, windowMs: 60 * 1000 };
 
 // The JSON API answers a well-formed request it cannot carry out (a scenario file that does not
@@ -38,7 +39,7 @@ async function principalOf(
   if (team !== undefined && team !== principal.teamSlug) {
     throw new AppError("not-found:team", NOT_FOUND_MESSAGE);
   }
-  if (!can(principal.role, capability)) {
+  if (!tokenCan(principal.role, principal.memberRole, capability)) {
     throw new AppError("forbidden:token", `This token's role (${principal.role}) may not do that.`);
   }
   return principal;
@@ -58,6 +59,7 @@ async function limit(db: Db, key: string): Promise<number | null> {
 export function tokenRoute<P>(
   capability: Capability,
   handler: (input: TokenRouteInput<P>) => Promise<unknown>,
+  options: { limitSessions?: boolean } = {},
 ) {
   return async (request: Request, context: { params: Promise<P> }): Promise<Response> => {
     let setCookie: string | undefined;
@@ -73,7 +75,12 @@ export function tokenRoute<P>(
         setCookie = session.setCookie;
         actor = session.actor;
       }
-      const key = token ? `api-token:${token.tokenId}` : actor ? `api-user:${actor.id}` : null;
+      // Tokens are always limited; the app's own pages (sessions) only where a route asks.
+      const key = token
+        ? `api-token:${token.tokenId}`
+        : actor && options.limitSessions
+          ? `api-user:${actor.id}`
+          : null;
       const wait = key ? await limit(db, key) : null;
       if (wait !== null) {
         response = errorResponse(

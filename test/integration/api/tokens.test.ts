@@ -4,8 +4,11 @@ import { beforeAll, describe, expect, it } from "vitest";
 import * as revisionRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/route";
 import * as revisionsRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/route";
 import * as scenariosRoute from "@/app/api/v1/teams/[team]/scenarios/route";
+import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
 import { apiTokens } from "@/db/schema/api-tokens";
+import { rateLimitBuckets } from "@/db/schema/rate-limits";
 import { memberships } from "@/db/schema/teams";
+import { API_RATE_LIMIT } from "@/lib/api/token-route";
 import { listApiTokens, revokeApiToken } from "@/lib/api-tokens/manage";
 import { createScenario } from "@/lib/workspace/scenarios";
 
@@ -112,6 +115,54 @@ describe("personal API tokens", () => {
       .delete(memberships)
       .where(and(eq(memberships.teamId, w.teamId), eq(memberships.userId, w.members.reviewer.id)));
     expect((await get(scenariosRoute.GET, token, { team: w.slug })).status).toBe(401);
+  });
+
+  it("acts only where both the token's role and the owner's current role allow", async () => {
+    const t2 = await makeWorld(db);
+    const { token } = await tokenFor(db, t2.members.editor, t2.slug, "editor");
+    const body = { fileName: "fe.csv", text: "eps11,eps22,gam12,sig11,sig22,sig12\n0,0,0,0,0,0\n" };
+    const params = { team: t2.slug, scenario: t2.scenarioId, number: "1" };
+    const post = () =>
+      callRoute(checksRoute.POST, { method: "POST", params, headers: bearer(token), body });
+    expect((await post()).status).toBe(201);
+    await db
+      .update(memberships)
+      .set({ role: "reviewer" })
+      .where(and(eq(memberships.teamId, t2.teamId), eq(memberships.userId, t2.members.editor.id)));
+    const demoted = await post();
+    expect(demoted.status).toBe(403);
+    expect(demoted.body.error.code).toBe("forbidden:token");
+    await expect(tokenFor(db, t2.members.owner, t2.slug, "owner")).resolves.toBeDefined();
+    await expect(tokenFor(db, t2.members.editor, t2.slug, "editor")).rejects.toMatchObject({
+      code: "forbidden:token-role",
+    });
+  });
+
+  it("answers 429 with Retry-After once a token passes its per-minute limit", async () => {
+    const { id, token } = await tokenFor(db, w.members.viewer, w.slug, "viewer");
+    expect(
+      (await get(revisionsRoute.GET, token, { team: w.slug, scenario: w.scenarioId })).status,
+    ).toBe(200);
+    // Fill this minute's bucket and the next one, so the answer does not hang on the clock.
+    const window = API_RATE_LIMIT.windowMs;
+    const start = Math.floor(Date.now() / window) * window;
+    for (const at of [start, start + window]) {
+      await db
+        .insert(rateLimitBuckets)
+        .values({ key: `api-token:${id}`, windowStart: new Date(at), count: API_RATE_LIMIT.limit })
+        .onConflictDoUpdate({
+          target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
+          set: { count: API_RATE_LIMIT.limit },
+        });
+    }
+    const last = await get(revisionsRoute.GET, token, { team: w.slug, scenario: w.scenarioId });
+    expect(last.status).toBe(429);
+    expect(Number(last.headers.get("retry-after"))).toBeGreaterThan(0);
+    // Another token of the same person is counted on its own.
+    const fresh = await tokenFor(db, w.members.viewer, w.slug, "viewer");
+    expect(
+      (await get(revisionsRoute.GET, fresh.token, { team: w.slug, scenario: w.scenarioId })).status,
+    ).toBe(200);
   });
 
   it("answers 401 for an unknown token of the right shape", async () => {

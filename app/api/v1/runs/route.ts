@@ -10,15 +10,19 @@ import { runScenario } from "@/lib/runs/run-scenario";
  * `npm run --silent drive -- file.json [--set id] [--format csv|json]` prints.
  * Bearer token (any role) or a signed-in session.
  */
-export const POST = tokenRoute("team:read", async ({ request, actor, query }) => {
-  if (!actor) throw new AppError("unauthenticated", "Send a Bearer token or sign in first.");
-  const body = await readJsonBody(request, BODY_LIMITS.scenario);
-  const run = readRunRequest(body, query, request.headers.get("accept"));
-  const output = runScenario(run, budgetedRunner(runBudgetMs()));
-  const headers: Record<string, string> = {
-    "content-type": output.contentType,
-    "cache-control": "no-store",
-  };
-  if (output.warnings.length > 0) headers["x-craquelure-warnings"] = output.warnings.join("; ");
-  return new Response(output.body, { status: 200, headers });
-});
+export const POST = tokenRoute(
+  "team:read",
+  async ({ request, actor, query }) => {
+    if (!actor) throw new AppError("unauthenticated", "Send a Bearer token or sign in first.");
+    const body = await readJsonBody(request, BODY_LIMITS.scenario);
+    const run = readRunRequest(body, query, request.headers.get("accept"));
+    const output = runScenario(run, budgetedRunner(runBudgetMs()));
+    const headers: Record<string, string> = {
+      "content-type": output.contentType,
+      "cache-control": "no-store",
+    };
+    if (output.warnings.length > 0) headers["x-craquelure-warnings"] = output.warnings.join("; ");
+    return new Response(output.body, { status: 200, headers });
+  },
+  { limitSessions: true },
+);
