@@ -64,6 +64,12 @@ export function ScenarioHeader({ team, summary, meta, latest }: ScenarioHeaderPr
         >
           Conformance checks
         </Link>
+        <Link
+          href={`/reports/${team.slug}/${summary.id}/${meta.number}`}
+          className="text-verdigris-dark hover:underline"
+        >
+          Calibration report
+        </Link>
       </p>
     </header>
   );
