@@ -1,4 +1,4 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, sql } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { parameterStudies, studyItems, type StudyItemRow } from "@/db/schema/parameter-studies";
@@ -73,4 +73,20 @@ export async function finishStudyItem(
     .update(studyItems)
     .set({ ...values, finishedAt: new Date() })
     .where(eq(studyItems.id, itemId));
+}
+
+export async function listStudiesForTeam(db: Executor, teamId: string, limit = 20) {
+  return db
+    .select({
+      id: parameterStudies.id,
+      name: parameterStudies.name,
+      total: parameterStudies.total,
+      createdAt: parameterStudies.createdAt,
+      done: sql<number>`(select count(*)::int from study_items i where i.study_id = parameter_studies.id and i.state = 'done')`,
+      failed: sql<number>`(select count(*)::int from study_items i where i.study_id = parameter_studies.id and i.state = 'failed')`,
+    })
+    .from(parameterStudies)
+    .where(eq(parameterStudies.teamId, teamId))
+    .orderBy(desc(parameterStudies.createdAt))
+    .limit(limit);
 }

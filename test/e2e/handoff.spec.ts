@@ -113,6 +113,12 @@ describe("hand-off to the simulation team", () => {
       )
       .toBe("done");
 
+    await ed.goto(`${rev}/study?study=${studyId}`);
+    await expect
+      .poll(() => ed.getByTestId("study-progress").textContent())
+      .toContain("3 of 3 sets finished");
+    await screenshot(ed, "handoff-study");
+
     // The reference bundle, fetched with the token.
     const bundle = await api(secret, `${rev}/bundle`);
     expect(bundle.status).toBe(200);

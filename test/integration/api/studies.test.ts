@@ -10,7 +10,7 @@ import { runPath } from "@/lib/mechanics/driver";
 import type { PathRunner } from "@/lib/scenario/drive-command";
 import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
 import { resultsToCsv } from "@/lib/scenario/results-csv";
-import { listStudyResults } from "@/db/queries/studies";
+import { listStudiesForTeam, listStudyResults } from "@/db/queries/studies";
 import { openStudyQueue } from "@/lib/studies/queue";
 import { getStudy, submitStudy } from "@/lib/studies/service";
 import { startStudyWorker } from "@/lib/studies/worker";
@@ -117,6 +117,8 @@ describe("parameter studies on the queue", () => {
     const study = await untilFinished(submitted.id);
     await Promise.all([a.offWork({ id: ids[0] }), b.offWork({ id: ids[1] })]);
     expect(study).toMatchObject({ done: 2, failed: 1, state: "finished with failures" });
+    const listed = (await listStudiesForTeam(db, t.teamId)).find((s) => s.id === submitted.id);
+    expect(listed).toMatchObject({ total: 3, done: 2, failed: 1 });
     const failed = study.items.find((i) => i.state === "failed")!;
     expect(failed).toMatchObject({ setId: "g2", error: "solver exploded on purpose", attempts: 3 });
     expect(study.items.find((i) => i.setId === "g3")).toMatchObject({ state: "done", attempts: 2 });
