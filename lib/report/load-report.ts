@@ -8,6 +8,7 @@ import { listTestRecordsForTeam } from "@/db/queries/test-records";
 import type { Actor } from "@/lib/accounts/actor";
 import { standardLoadCases } from "@/lib/bundle/load-cases";
 import { runPath } from "@/lib/mechanics/driver";
+import { budgetedRunner, runBudgetMs, TimeBudgetExceeded } from "@/lib/runs/budgeted-runner";
 import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
 import { authorizeTeam } from "@/lib/teams/access";
 import { listComments } from "@/lib/workspace/comments";
@@ -42,10 +43,20 @@ export async function loadCalibrationReport(
     fits.map((f) => ({ ...f, residuals: f.residuals ?? [] })),
     new Map(records.map((r) => [r.id, r.name])),
   );
-  const runs = file.parameterSets.map((set) => ({
-    set,
-    run: runPath(toMaterialParams(set), file.path.legs),
-  }));
+  // A path may hold up to 1,000,000 increments: each set's run has the API's time budget, and a
+  // set over it is left out of the charts (and said so) rather than holding the page.
+  const runner = budgetedRunner(runBudgetMs());
+  const runs = file.parameterSets.flatMap((set) => {
+    try {
+      return [{ set, run: runner(toMaterialParams(set), file.path.legs) }];
+    } catch (error) {
+      if (error instanceof TimeBudgetExceeded) return [];
+      throw error;
+    }
+  });
+  const skipped = file.parameterSets
+    .filter((s) => !runs.some((r) => r.set.id === s.id))
+    .map((s) => s.id);
   const stressStrain = chartGeometry(
     runs.map(({ set, run }) => ({
       name: set.id,
@@ -88,6 +99,7 @@ export async function loadCalibrationReport(
     checks,
     charts: { stressStrain, damage, tension },
     statuses: runs.map(({ set, run }) => ({ setId: set.id, ...run.status })),
+    skipped,
   };
 }
 export type CalibrationReport = Awaited<ReturnType<typeof loadCalibrationReport>>;

@@ -106,6 +106,11 @@ export default async function CalibrationReportPage({ params }: { params: Promis
               {s.warnings.length > 0 ? `; ${s.warnings.join("; ")}` : ""}
             </li>
           ))}
+          {report.skipped.map((id) => (
+            <li key={id}>
+              Set {id}: not drawn, its run on this path exceeds the time budget of a page.
+            </li>
+          ))}
         </ul>
       </Section>
       <Section title="Conformance checks">
