@@ -56,7 +56,8 @@ describe("hand-off to the simulation team", () => {
 
     // A token from the account page, shown once.
     await ed.goto("/account");
-    await ed.getByLabel("Name").fill(`pipeline ${randomBytes(2).toString("hex")}`);
+    const tokenName = `pipeline ${randomBytes(2).toString("hex")}`;
+    await ed.getByLabel("Name").fill(tokenName);
     await ed.getByLabel("Role").selectOption("editor");
     await ed.getByRole("button", { name: "Create token" }).click();
     const secret = (
@@ -153,5 +154,19 @@ describe("hand-off to the simulation team", () => {
     expect(text).toMatch(/Verdict: Approved by/);
     expect(text).toContain("no design allowable");
     expect(text).toMatch(/fe-history\.csv/);
+
+    // Revoked on the account page, the token stops working at once.
+    await ed.goto("/account");
+    ed.once("dialog", (dialog) => void dialog.accept());
+    await ed
+      .getByRole("row", { name: new RegExp(tokenName) })
+      .getByRole("button", { name: "Revoke" })
+      .click();
+    await expect
+      .poll(() => ed.getByRole("row", { name: new RegExp(tokenName) }).textContent())
+      .toContain("revoked");
+    expect(
+      (await api(secret, "/runs", { method: "POST", body: JSON.stringify(demo) })).status,
+    ).toBe(401);
   });
 });
