@@ -2,12 +2,12 @@
 # The one test command: lint, format, types, unit tests, integration tests on a throwaway
 # PostgreSQL cluster, and browser tests in Debian's Chromium against a production build.
 # Ends with one plain line "N passed, N failed" summed over every suite.
-# Usage: scripts/test.sh [checks] [unit] [integration] [e2e]   (default: all)
+# Usage: scripts/test.sh [checks] [unit] [integration] [e2e] [faults]   (default: all)
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
 
-SUITES=${*:-checks unit integration e2e}
+SUITES=${*:-checks unit integration e2e faults}
 want() { [[ " $SUITES " == *" $1 "* ]]; }
 
 export NEXT_TELEMETRY_DISABLED=1 NO_COLOR=1 FORCE_COLOR=0
@@ -111,6 +111,23 @@ if want e2e; then
     log "FAILED: next build"
     tail -n 60 "$RUN_DIR/build.log" >&2
   fi
+fi
+
+# Faults under load, short form: its own cluster, mail server and build (.next-load); each
+# check it prints counts as one test.
+if want faults; then
+  log "suite: faults (short)"
+  # Reuse the browser tests' fresh build when there is one, rather than building again.
+  dist=.next-load
+  want e2e && [ -f .next-test/BUILD_ID ] && dist=.next-test
+  FAULTS_MODE=short FAULTS_DIST_DIR=$dist bash scripts/test-faults.sh >"$RUN_DIR/faults.log" 2>&1
+  rc=$?
+  grep -E '^(ok|FAIL) ' "$RUN_DIR/faults.log" >&2 || true
+  read -r p f < <(sed -nE 's/^test:faults: passed=([0-9]+) failed=([0-9]+)$/\1 \2/p' "$RUN_DIR/faults.log" | tail -n 1)
+  passed=$((passed + ${p:-0}))
+  failed=$((failed + ${f:-1}))
+  if [ "$rc" -ne 0 ] && [ "${f:-1}" -eq 0 ]; then failed=$((failed + 1)); fi
+  [ "$rc" -ne 0 ] && tail -n 30 "$RUN_DIR/faults.log" >&2
 fi
 
 echo "$passed passed, $failed failed"
