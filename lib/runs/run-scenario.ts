@@ -17,7 +17,8 @@ import type { RunRequest } from "./run-request";
 const FILE_NAME = "body";
 
 export interface RunOutput {
-  body: string;
+  /** The output in the driver's own pieces: a 1,000,000-row CSV is never joined into one string. */
+  chunks: string[];
   contentType: string;
   warnings: string[];
 }
@@ -56,7 +57,7 @@ export function runScenario(request: RunRequest, runner: PathRunner): RunOutput 
     throw new AppError("invalid:file", err[0] ?? "The file is not valid.");
   if (code !== EXIT_OK) throw new Error(err[0] ?? "the driver failed");
   return {
-    body: out.join(""),
+    chunks: out,
     contentType: request.format === "csv" ? "text/csv; charset=utf-8" : "application/json",
     warnings: err.filter((l) => l.startsWith("warning: ")).map((l) => l.slice(9)),
   };

@@ -5,6 +5,8 @@ import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
 
 import * as runsRoute from "@/app/api/v1/runs/route";
+import { runPath } from "@/lib/mechanics/driver";
+import { runDriveCommand } from "@/lib/scenario/drive-command";
 
 import { openTestDb } from "../support/db";
 import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";
@@ -55,6 +57,28 @@ describe("POST /api/v1/runs", () => {
       body: demo,
     });
     expect(accepted.text).toBe(expected);
+  });
+
+  it("streams a run of many chunks without losing or reordering a byte", async () => {
+    const long = structuredClone(demo);
+    long.path.legs = [
+      { control: ["strain", "stress", "stress"], target: [0.012, 0, 0], increments: 12_000 },
+      { control: ["stress", "stress", "stress"], target: [0, 0, 0], increments: 8_000 },
+    ];
+    const res = await callText(runsRoute.POST, { headers: bearer(token), body: long });
+    expect(res.status).toBe(200);
+    let expected = "";
+    runDriveCommand(
+      ["long.json"],
+      {
+        readFile: () => JSON.stringify(long),
+        stdout: (t) => void (expected += t),
+        stderr: () => {},
+      },
+      runPath,
+    );
+    expect(res.text.split("\n")).toHaveLength(20_003);
+    expect(res.text).toBe(expected);
   });
 
   it("runs for a signed-in session too, and refuses anonymous callers with 401", async () => {

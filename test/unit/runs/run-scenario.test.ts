@@ -28,7 +28,7 @@ describe("runScenario", () => {
     const set = parsed.scenario.parameterSets[0];
     const direct = runPath(toMaterialParams(set), parsed.scenario.path.legs);
     const out = runScenario(readRunRequest(demo, {}, null), runPath);
-    expect(out.body).toBe(resultsToCsv(direct.columns, direct.rows));
+    expect(out.chunks.join("")).toBe(resultsToCsv(direct.columns, direct.rows));
   });
 
   it("gives up with invalid:time-budget once the clock passes the budget", () => {
@@ -45,7 +45,7 @@ describe("runScenario", () => {
     const clock = () => (now += 1);
     const request = readRunRequest(longPath(CHUNK_INCREMENTS * 2), {}, null);
     const out = runScenario(request, budgetedRunner(1000, clock));
-    expect(out.body.trim().split("\n")).toHaveLength(CHUNK_INCREMENTS * 2 + 2);
+    expect(out.chunks.join("").trim().split("\n")).toHaveLength(CHUNK_INCREMENTS * 2 + 2);
   });
 });
 

@@ -5,6 +5,19 @@ import { budgetedRunner, runBudgetMs } from "@/lib/runs/budgeted-runner";
 import { readRunRequest } from "@/lib/runs/run-request";
 import { runScenario } from "@/lib/runs/run-scenario";
 
+/** Hands the pieces to the client one by one, releasing each once sent. */
+function streamOf(chunks: string[]): ReadableStream<Uint8Array> {
+  const encoder = new TextEncoder();
+  let next = 0;
+  return new ReadableStream({
+    pull(controller) {
+      if (next >= chunks.length) return controller.close();
+      controller.enqueue(encoder.encode(chunks[next]));
+      chunks[next++] = "";
+    },
+  });
+}
+
 /**
  * Runs a scenario file with the same core and answers exactly what
  * `npm run --silent drive -- file.json [--set id] [--format csv|json]` prints.
@@ -22,7 +35,7 @@ export const POST = tokenRoute(
       "cache-control": "no-store",
     };
     if (output.warnings.length > 0) headers["x-craquelure-warnings"] = output.warnings.join("; ");
-    return new Response(output.body, { status: 200, headers });
+    return new Response(streamOf(output.chunks), { status: 200, headers });
   },
   { limitSessions: true },
 );
