@@ -3,8 +3,15 @@
 // STUDY_WORKER=off leaves an instance out (it still submits jobs).
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  if (process.env.STUDY_WORKER === "off" || !process.env.DATABASE_URL) return;
-  if (process.env.NEXT_PHASE === "phase-production-build") return;
+  if (!process.env.DATABASE_URL || process.env.NEXT_PHASE === "phase-production-build") return;
+  try {
+    // Mail queued in mail_outbox before a restart goes out without waiting for the next mail.
+    const { startMailOutbox } = await import("./lib/email/outbox-sender");
+    startMailOutbox();
+  } catch (error) {
+    console.error("[mail outbox] not started:", error instanceof Error ? error.message : error);
+  }
+  if (process.env.STUDY_WORKER === "off") return;
   try {
     const { startAppStudyWorker } = await import("./lib/studies/app-queue");
     await startAppStudyWorker();

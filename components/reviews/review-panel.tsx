@@ -5,6 +5,7 @@ import { useState } from "react";
 
 import { ReviewBadge } from "@/components/scenarios/review-badge";
 import { Panel } from "@/components/ui/panel";
+import { MAIL_QUEUED_NOTICE } from "@/lib/email/types";
 import { messageOf } from "@/lib/workspace-client/api-fetch";
 import { formatWhen, personName } from "@/lib/workspace-client/format";
 import {
@@ -105,6 +106,11 @@ export function ReviewPanel(props: ReviewPanelProps) {
           <p role="status" className="text-verdigris-dark">
             {act.data.notified === 1 ? "One person was" : `${act.data.notified} people were`} told
             by e-mail.
+          </p>
+        ) : null}
+        {act.isSuccess && act.data.mailQueued > 0 ? (
+          <p role="status" className="text-verdigris-dark">
+            {MAIL_QUEUED_NOTICE}
           </p>
         ) : null}
         {review.data?.history.length ? (
