@@ -32,11 +32,7 @@ pg_cluster_start "$RUN_DIR/pg" "$PGPORT" "-c shared_buffers=256MB -c max_connect
 pg_create_db "$PGPORT" craquelure_bench
 npm run --silent db:migrate
 
-# Reuse the bench build when no source changed since it was made.
-if [ ! -f .next-bench/BUILD_ID ] || [ -n "$(find app components lib workers db public next.config.ts package-lock.json -newer .next-bench/BUILD_ID -print -quit 2>/dev/null)" ]; then
-  log "building the app into .next-bench (about a minute)"
-  npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; die "build failed"; }
-fi
+build_if_stale "$RUN_DIR/build.log"
 
 # The load script seeds, starts `next start` as its own child and stops it before it returns.
 npx tsx scripts/bench-api.ts

@@ -32,9 +32,6 @@ pg_cluster_start "$RUN_DIR/pg" "$PGPORT" "-c shared_buffers=256MB -c max_connect
 pg_create_db "$PGPORT" craquelure_load
 npm run --silent db:migrate
 
-if [ ! -f .next-load/BUILD_ID ] || [ -n "$(find app components lib workers db public proxy.ts next.config.ts package-lock.json -newer .next-load/BUILD_ID -print -quit 2>/dev/null)" ]; then
-  log "building the app into .next-load (about a minute)"
-  npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; die "build failed"; }
-fi
+build_if_stale "$RUN_DIR/build.log"
 
 npx tsx scripts/load/bench-load.ts || { tail -n 30 "$BENCH_APP_LOG" >&2; exit 1; }

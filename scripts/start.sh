@@ -49,11 +49,7 @@ node --import tsx scripts/fake-smtp.ts &
 children+=($!)
 wait_for_port "$SMTP_PORT" 20 || die "fake mail server did not start"
 
-# Build when there is no build yet or a source file changed since the last one.
-if [ ! -f .next/BUILD_ID ] || [ -n "$(find app components lib workers db public next.config.ts package-lock.json -newer .next/BUILD_ID -print -quit 2>/dev/null)" ]; then
-  log "building the app (about a minute)"
-  npx next build >"$DATA_DIR/build.log" 2>&1 || { tail -n 40 "$DATA_DIR/build.log" >&2; die "build failed (see .data/build.log)"; }
-fi
+build_if_stale "$DATA_DIR/build.log"
 
 node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" &
 children+=($!)

@@ -35,9 +35,6 @@ pg_cluster_start "$PG_DIR" "$PGPORT" "$PG_OPTS"
 pg_create_db "$PGPORT" craquelure_faults
 npm run --silent db:migrate
 
-if [ ! -f "$CRAQUELURE_DIST_DIR/BUILD_ID" ] || [ -n "$(find app components lib workers db public proxy.ts next.config.ts package-lock.json -newer "$CRAQUELURE_DIST_DIR/BUILD_ID" -print -quit 2>/dev/null)" ]; then
-  log "building the app into $CRAQUELURE_DIST_DIR (about a minute)"
-  npx next build >"$RUN_DIR/build.log" 2>&1 || { tail -n 40 "$RUN_DIR/build.log" >&2; die "build failed"; }
-fi
+build_if_stale "$RUN_DIR/build.log"
 
 npx tsx scripts/load/faults.ts || { log "app log tail:"; tail -n 30 "$FAULTS_APP_LOG" >&2; exit 1; }

@@ -108,3 +108,19 @@ wait_for_port() {
   done
   return 1
 }
+
+# build_if_stale LOGFILE: `next build` into ${CRAQUELURE_DIST_DIR:-.next} when there is no build
+# there yet or any input of the build changed since it was made.
+build_if_stale() {
+  local log_file=$1 dist=${CRAQUELURE_DIST_DIR:-.next}
+  local inputs=(app components lib workers db public proxy.ts instrumentation.ts next.config.ts
+    tailwind.config.ts postcss.config.js package-lock.json)
+  if [ -f "$dist/BUILD_ID" ] && [ -z "$(find "${inputs[@]}" -newer "$dist/BUILD_ID" -print -quit 2>/dev/null)" ]; then
+    return 0
+  fi
+  log "building the app into $dist (about a minute)"
+  NODE_ENV=production npx next build >"$log_file" 2>&1 || {
+    tail -n 40 "$log_file" >&2
+    die "build failed (log: $log_file)"
+  }
+}
