@@ -3,6 +3,7 @@ import { eq } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/password";
 import type { Role } from "@/lib/auth/permissions";
 import { seedDemoRecords } from "@/lib/records/seed-demo-records";
+import { seedDemoWorkspace } from "@/lib/workspace/seed-demo-workspace";
 
 import { createDb, requireDatabaseUrl } from "./client";
 import { memberships, teams } from "./schema/teams";
@@ -48,6 +49,10 @@ async function main() {
       .from(users)
       .where(eq(users.email, emailOf("editor")));
     await seedDemoRecords(db, team.id, editor?.id ?? null);
+    if (editor) {
+      const actor = { id: editor.id, email: editor.email, name: editor.name, verified: true };
+      await seedDemoWorkspace(db, team, actor);
+    }
     console.log(`Demo team (invented data): "${TEAM.name}" at /teams/${TEAM.slug}`);
     console.log("Demo accounts (invented; passwords as seeded, unless changed since):");
     for (const demo of DEMO_USERS) {

@@ -51,7 +51,8 @@ wait_for_port "$SMTP_PORT" 20 || die "fake mail server did not start"
 
 build_if_stale "$DATA_DIR/build.log"
 
-node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" &
+# Idle keep-alive sockets outlive any client's (65 s), so a client never reuses one the server is closing.
+node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" --keepAliveTimeout 65000 &
 children+=($!)
 wait_for_http "http://127.0.0.1:$PORT/" 60 || die "the app did not answer on port $PORT"
 log "Craquelure is running at http://127.0.0.1:$PORT  (mail outbox: http://127.0.0.1:$PORT/dev/outbox)"

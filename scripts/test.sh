@@ -97,10 +97,16 @@ if want e2e; then
   if NODE_ENV=production npx next build >"$RUN_DIR/build.log" 2>&1; then
     passed=$((passed + 1))
     npm run --silent db:seed >/dev/null
-    NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" >"$RUN_DIR/app.log" 2>&1 &
+    NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" --keepAliveTimeout 65000 >"$RUN_DIR/app.log" 2>&1 &
     children+=($!)
     if wait_for_http "http://127.0.0.1:$APP_PORT/" 60; then
+      failed_before=$failed
       E2E_BASE_URL=http://127.0.0.1:$APP_PORT run_vitest e2e vitest.e2e.config.ts
+      # The server's side of a failure is otherwise lost with the run folder.
+      if [ "$failed" -gt "$failed_before" ]; then
+        log "app log (last 60 lines):"
+        tail -n 60 "$RUN_DIR/app.log" >&2
+      fi
     else
       failed=$((failed + 1))
       log "FAILED: the app did not start"
