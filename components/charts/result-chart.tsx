@@ -2,6 +2,7 @@
 
 import { useMemo, useRef } from "react";
 import type { ChartDef } from "@/lib/workbench/chart-defs";
+import { type ChartOverlay, overlayTraces } from "@/lib/workbench/chart-overlays";
 import { buildChart, type TraceSource } from "@/lib/workbench/chart-traces";
 import { chartImageName } from "@/lib/workbench/file-names";
 import { emitEvent } from "@/lib/workbench/instrumentation";
@@ -10,6 +11,8 @@ import type { SetEntry } from "@/lib/workbench/set-list";
 import { Plot, saveChartImage } from "./plot";
 import { chartLayout, CHART_CONFIG } from "./chart-layout";
 import { useDrawVersion } from "./use-draw-version";
+
+const NO_OVERLAYS: readonly ChartOverlay[] = [];
 
 export interface ResultChartProps {
   def: ChartDef;
@@ -20,6 +23,8 @@ export interface ResultChartProps {
   scenarioName: string;
   /** Extra controls in the chart's heading (e.g. the component pickers). */
   controls?: React.ReactNode;
+  /** Measured curves drawn when their axes are this chart's. */
+  overlays?: readonly ChartOverlay[];
 }
 
 export function ResultChart({
@@ -30,6 +35,7 @@ export function ResultChart({
   onCursor,
   scenarioName,
   controls,
+  overlays = NO_OVERLAYS,
 }: ResultChartProps) {
   const version = useDrawVersion(store);
   const graph = useRef<HTMLElement | null>(null);
@@ -55,7 +61,11 @@ export function ResultChart({
       complete: store.settled,
     };
   }, [def, look, cursor, version, store]);
-  const empty = built.traces.length === 0;
+  // Apart from the streamed curves: a record is thinned once per axes or selection change.
+  const measured = useMemo(() => overlayTraces(def, overlays), [def, overlays]);
+  // Overlays go last so a click's curveNumber still indexes built.rowsOf (they have no steps).
+  const data = useMemo(() => [...built.traces, ...measured], [built.traces, measured]);
+  const empty = data.length === 0;
   const layout = useMemo(() => chartLayout(def, empty), [def, empty]);
 
   const drawn = (_fig: unknown, gd: HTMLElement) => {
@@ -97,7 +107,7 @@ export function ResultChart({
       </figcaption>
       <div className="h-64 w-full">
         <Plot
-          data={built.traces}
+          data={data}
           layout={layout}
           config={CHART_CONFIG}
           useResizeHandler

@@ -9,8 +9,10 @@ import { messageOf } from "@/lib/workspace-client/api-fetch";
 import { teamPages } from "@/lib/workspace-client/api-urls";
 import { type SaveConflict, saveConflictOf } from "@/lib/workspace-client/conflict";
 import { useSaveRevision } from "@/lib/workspace-client/use-save-revision";
+import { useRecordOverlays } from "@/lib/workspace-client/use-test-records";
 
 import { ConflictPanel } from "./conflict-panel";
+import { RecordOverlayPicker } from "./record-overlay-picker";
 import { SaveRevisionForm } from "./save-revision-form";
 
 export interface ScenarioEditorProps {
@@ -30,6 +32,9 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
   const [conflict, setConflict] = useState<SaveConflict | null>(null);
   const [message, setMessage] = useState("");
   const [error, setError] = useState<string | null>(null);
+  // Which test records are drawn over the charts: a way of looking, not part of the revision.
+  const [recordIds, setRecordIds] = useState<string[]>([]);
+  const records = useRecordOverlays(slug, recordIds);
 
   const submit = (base: number, text: string) => {
     if (!pending) return;
@@ -89,10 +94,20 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
           />
         </div>
       ) : null}
+      <div className="mx-auto max-w-[1600px] px-4">
+        <RecordOverlayPicker
+          slug={slug}
+          selected={recordIds}
+          onChange={setRecordIds}
+          loading={records.loading}
+          errors={records.errors}
+        />
+      </div>
       <Workbench
         initialScenario={file}
         readOnly={!editable}
         onSave={editable ? (f) => setPending(f) : undefined}
+        overlays={records.overlays}
       />
     </div>
   );

@@ -10,6 +10,7 @@ import {
   type StressComponent,
   stressStrainDef,
 } from "@/lib/workbench/chart-defs";
+import type { ChartOverlay } from "@/lib/workbench/chart-overlays";
 import type { ResultsStore } from "@/lib/workbench/results-store";
 import type { SetEntry } from "@/lib/workbench/set-list";
 import { StepCursor } from "./step-cursor";
@@ -19,12 +20,13 @@ export interface ChartGridProps {
   entries: SetEntry[];
   scenarioName: string;
   totalSteps: number;
+  overlays?: readonly ChartOverlay[];
 }
 
 const pickCls = "rounded border border-glaze-line bg-white px-1 py-0.5 text-xs";
 
 /** The live charts, every visible set overlaid, one step cursor shared by all. */
-export function ChartGrid({ store, entries, scenarioName, totalSteps }: ChartGridProps) {
+export function ChartGrid({ store, entries, scenarioName, totalSteps, overlays }: ChartGridProps) {
   const [x, setX] = useState<StrainComponent>("eps11");
   const [y, setY] = useState<StressComponent>("sig11");
   const [cursor, setCursor] = useState<number | null>(null);
@@ -63,7 +65,7 @@ export function ChartGrid({ store, entries, scenarioName, totalSteps }: ChartGri
     <div className="space-y-3">
       <StepCursor value={cursor} max={totalSteps} onChange={setCursor} />
       <div className="grid grid-cols-1 gap-3 xl:grid-cols-2">
-        <ResultChart def={ssDef} controls={pickers} {...common} />
+        <ResultChart def={ssDef} controls={pickers} overlays={overlays} {...common} />
         {FIXED_CHARTS.map((def) => (
           <ResultChart key={def.key} def={def} {...common} />
         ))}

@@ -5,6 +5,7 @@ import { useCallback, useMemo, useReducer, useState } from "react";
 import { Panel } from "@/components/ui/panel";
 import { expandPathDoc } from "@/lib/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
+import type { ChartOverlay } from "@/lib/workbench/chart-overlays";
 import {
   fromScenario,
   type OpenedScenario,
@@ -37,9 +38,17 @@ export interface WorkbenchProps {
   onSave?: (file: ScenarioFileJson) => void | Promise<void>;
   /** Keep the state in the address so it can be sent as a link (the sandbox). */
   syncUrl?: boolean;
+  /** Measured curves drawn over the chart whose axes they match (test records); not saved. */
+  overlays?: readonly ChartOverlay[];
 }
 
-export function Workbench({ initialScenario, readOnly, onSave, syncUrl }: WorkbenchProps) {
+export function Workbench({
+  initialScenario,
+  readOnly,
+  onSave,
+  syncUrl,
+  overlays,
+}: WorkbenchProps) {
   const [m, dispatch] = useReducer(workbenchReducer, initialScenario, (s) =>
     initModel(fromScenario(s)),
   );
@@ -158,6 +167,7 @@ export function Workbench({ initialScenario, readOnly, onSave, syncUrl }: Workbe
               entries={m.entries}
               scenarioName={m.name}
               totalSteps={totalSteps}
+              overlays={overlays}
             />
           </Panel>
           <Panel id="table" title="Results table">

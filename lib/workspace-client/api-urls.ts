@@ -20,6 +20,8 @@ export function teamApi(slug: string) {
     parameterSets: () => `${base}/parameter-sets`,
     parameterSet: (id: string) => `${base}/parameter-sets/${enc(id)}`,
     audit: (page: number) => `${base}/audit?page=${page}`,
+    testRecords: () => `${base}/test-records`,
+    testRecord: (id: string) => `${base}/test-records/${enc(id)}`,
   };
 }
 

@@ -13,5 +13,7 @@ export const workspaceKeys = {
     ["team", slug, "scenarios", id, "diff", from, to] as const,
   shareLinks: (slug: string, id: string) => ["team", slug, "scenarios", id, "share-links"] as const,
   parameterSets: (slug: string) => ["team", slug, "parameter-sets"] as const,
+  testRecords: (slug: string) => ["team", slug, "test-records"] as const,
+  testRecord: (slug: string, id: string) => ["team", slug, "test-records", id] as const,
   audit: (slug: string, page: number) => ["team", slug, "audit", page] as const,
 };

@@ -1,0 +1,77 @@
+"use client";
+
+import { overlayAxesOf } from "@/lib/records/record-overlay";
+import { messageOf } from "@/lib/workspace-client/api-fetch";
+import { useTestRecords } from "@/lib/workspace-client/use-test-records";
+import { STRAIN_LABEL, STRESS_LABEL } from "@/lib/workbench/chart-defs";
+
+export interface RecordOverlayPickerProps {
+  slug: string;
+  selected: string[];
+  onChange: (ids: string[]) => void;
+  /** How the chosen records' points are coming along. */
+  loading: boolean;
+  errors: string[];
+}
+
+/** Tick team test records to draw over the stress–strain chart; kept only while the page is open. */
+export function RecordOverlayPicker({
+  slug,
+  selected,
+  onChange,
+  loading,
+  errors,
+}: RecordOverlayPickerProps) {
+  const list = useTestRecords(slug);
+  const records = list.data?.items ?? [];
+  const toggle = (id: string) =>
+    onChange(selected.includes(id) ? selected.filter((s) => s !== id) : [...selected, id]);
+
+  return (
+    <details className="rounded-lg border border-glaze-line bg-white/60 px-3 py-2 text-sm">
+      <summary className="cursor-pointer font-display font-semibold">
+        Test records on the charts
+        <span className="ml-2 font-sans text-xs font-normal text-ink-faint">
+          {selected.length ? `${selected.length} chosen` : "none chosen"}
+          {loading ? " · loading points…" : ""}
+        </span>
+      </summary>
+      <p className="mt-2 text-xs text-ink-faint">
+        A record is drawn dotted as “test: name” when the stress–strain chart shows its pair; these
+        choices are not saved with the revision.
+      </p>
+      {list.isError ? <p className="mt-2 text-kiln-dark">{messageOf(list.error)}</p> : null}
+      {errors.map((e, i) => (
+        <p key={i} className="mt-2 text-kiln-dark">
+          {e}
+        </p>
+      ))}
+      {list.isSuccess && records.length === 0 ? (
+        <p className="mt-2 text-ink-soft">This team has no test records yet.</p>
+      ) : null}
+      <ul className="mt-2 space-y-1">
+        {records.map((r) => {
+          const axes = overlayAxesOf(r.testType);
+          return (
+            <li key={r.id}>
+              <label className={`flex items-center gap-2 ${axes ? "" : "text-ink-faint"}`}>
+                <input
+                  type="checkbox"
+                  disabled={!axes}
+                  checked={selected.includes(r.id)}
+                  onChange={() => toggle(r.id)}
+                />
+                <span>
+                  {r.name} — {r.testType}, {r.loading}
+                  {axes
+                    ? ` · ${STRESS_LABEL[axes.y]} against ${STRAIN_LABEL[axes.x]}`
+                    : " · no single stress–strain pair to draw"}
+                </span>
+              </label>
+            </li>
+          );
+        })}
+      </ul>
+    </details>
+  );
+}
