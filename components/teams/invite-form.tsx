@@ -54,6 +54,7 @@ export function InviteForm({ teamSlug, roles }: { teamSlug: string; roles: reado
             id="invite-role"
             roles={roles}
             className="mt-1"
+            defaultValue="viewer"
             aria-invalid={errors.role ? true : undefined}
             aria-describedby={errors.role ? "invite-role-error" : undefined}
             {...form.register("role")}

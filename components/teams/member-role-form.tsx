@@ -32,9 +32,12 @@ export function MemberRoleForm({ teamSlug, userId, memberName, role, roles }: Me
         <label htmlFor={id} className="sr-only">
           Role of {memberName}
         </label>
+        {/* defaultValue renders the member's role on the server too: before hydration the
+            select would otherwise show (and a quick click submit) the first role in the list. */}
         <RoleSelect
           id={id}
           roles={roles}
+          defaultValue={role}
           {...form.register("role")}
           aria-describedby={`${id}-error`}
         />
