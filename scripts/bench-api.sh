@@ -9,8 +9,8 @@ source scripts/lib/common.sh
 export NEXT_TELEMETRY_DISABLED=1 NODE_ENV=production
 export CRAQUELURE_DIST_DIR=.next-bench
 RUN_DIR=$(pwd)/.test-data/bench-api-$$
-PGPORT=${BENCH_PG_PORT:-$((56000 + $$ % 900))}
-export BENCH_APP_PORT=${BENCH_APP_PORT:-$((33000 + $$ % 900))}
+PGPORT=${BENCH_PG_PORT:-$((23000 + $$ % 900))}
+export BENCH_APP_PORT=${BENCH_APP_PORT:-$((30000 + $$ % 900))}
 export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_bench
 export APP_URL=http://127.0.0.1:$BENCH_APP_PORT
 # Review mails are not part of this benchmark; point SMTP at a closed port on loopback.

@@ -14,7 +14,7 @@ import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
 import { measure } from "./bench-api-measure";
 import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";
 
-const PORT = Number(process.env.BENCH_APP_PORT ?? 33000);
+const PORT = Number(process.env.BENCH_APP_PORT ?? 30000);
 const BASE = `http://127.0.0.1:${PORT}`;
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);

@@ -10,8 +10,8 @@ source scripts/lib/common.sh
 export NEXT_TELEMETRY_DISABLED=1 NODE_ENV=production
 export CRAQUELURE_DIST_DIR=.next-load
 RUN_DIR=$(pwd)/.test-data/bench-load-$$
-PGPORT=${BENCH_PG_PORT:-$((58000 + $$ % 900))}
-export BENCH_APP_PORT=${BENCH_APP_PORT:-$((36000 + $$ % 900))}
+PGPORT=${BENCH_PG_PORT:-$((21000 + $$ % 900))}
+export BENCH_APP_PORT=${BENCH_APP_PORT:-$((28000 + $$ % 900))}
 export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_load
 export APP_URL=http://127.0.0.1:$BENCH_APP_PORT BENCH_APP_LOG=$RUN_DIR/app.log
 # No mail is sent by this workload; studies are not part of it.

@@ -7,7 +7,7 @@ cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
 
 PORT=${PORT:-3000}
-PGPORT=${CRAQUELURE_PG_PORT:-54329}
+PGPORT=${CRAQUELURE_PG_PORT:-25432}
 SMTP_PORT=${SMTP_PORT:-2525}
 DATA_DIR=$(pwd)/.data
 

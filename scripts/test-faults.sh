@@ -10,9 +10,9 @@ source scripts/lib/common.sh
 export NEXT_TELEMETRY_DISABLED=1 NODE_ENV=production
 export CRAQUELURE_DIST_DIR=${FAULTS_DIST_DIR:-.next-load}
 RUN_DIR=$(pwd)/.test-data/faults-$$
-export PG_DIR=$RUN_DIR/pg PGPORT=${FAULTS_PG_PORT:-$((57000 + $$ % 900))}
+export PG_DIR=$RUN_DIR/pg PGPORT=${FAULTS_PG_PORT:-$((22000 + $$ % 900))}
 export PG_OPTS="-c max_connections=60"
-export FAULTS_APP_PORT=${FAULTS_APP_PORT:-$((35000 + $$ % 900))}
+export FAULTS_APP_PORT=${FAULTS_APP_PORT:-$((29000 + $$ % 900))}
 export SMTP_HOST=127.0.0.1 SMTP_PORT=${FAULTS_SMTP_PORT:-$((27000 + $$ % 900))}
 export MAIL_OUTBOX_DIR=$RUN_DIR/outbox MAIL_FROM="Craquelure faults <faults@craquelure.local>"
 export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_faults

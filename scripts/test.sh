@@ -12,7 +12,7 @@ want() { [[ " $SUITES " == *" $1 "* ]]; }
 
 export NEXT_TELEMETRY_DISABLED=1 NO_COLOR=1 FORCE_COLOR=0
 RUN_DIR=$(pwd)/.test-data/run-$$
-PGPORT=${TEST_PG_PORT:-$((55000 + $$ % 900))}
+PGPORT=${TEST_PG_PORT:-$((24000 + $$ % 900))}
 SMTP_PORT=${TEST_SMTP_PORT:-$((26000 + $$ % 900))}
 APP_PORT=${TEST_APP_PORT:-$((31000 + $$ % 900))}
 REPORTS=$RUN_DIR/reports

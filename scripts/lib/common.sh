@@ -1,6 +1,8 @@
 # Shared helpers for scripts/start.sh and scripts/test.sh (sourced, not run).
 # Why shell: the set-up must work on a machine that has nothing but Node and apt.
 
+# Port choice: every script picks its listening ports below 32768, outside Linux's ephemeral range
+# (32768–60999), where an outgoing connection of another test can hold the port at bind time.
 log() { printf '[craquelure] %s\n' "$*" >&2; }
 die() { log "error: $*"; exit 1; }
 
