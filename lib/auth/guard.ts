@@ -1,9 +1,9 @@
 import "server-only";
 
-import { notFound, redirect } from "next/navigation";
+import { redirect } from "next/navigation";
 
 import { getDb } from "@/db/index";
-import { isAppError } from "@/lib/errors";
+import { orNotFound } from "@/lib/pages/or-not-found";
 import { authorizeTeam, type TeamContext } from "@/lib/teams/access";
 
 import type { Capability } from "./permissions";
@@ -21,10 +21,5 @@ export async function requireTeamRole(
 ): Promise<TeamContext> {
   const actor = await getActor();
   if (!actor) redirect(`/sign-in?next=${encodeURIComponent(`/teams/${teamSlug}`)}`);
-  try {
-    return await authorizeTeam(getDb(), actor, teamSlug, capability);
-  } catch (error) {
-    if (isAppError(error)) notFound();
-    throw error;
-  }
+  return orNotFound(authorizeTeam(getDb(), actor, teamSlug, capability));
 }

@@ -8,7 +8,7 @@ import { SharedWorkbenchLoader } from "@/components/share/shared-workbench-loade
 import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
 import { clientAddressOf } from "@/lib/api/request-actor";
-import { isAppError } from "@/lib/errors";
+import { orNotFound } from "@/lib/pages/or-not-found";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
 import { openSharedRevision } from "@/lib/workspace/share-view";
 
@@ -21,13 +21,8 @@ export const metadata: Metadata = {
 
 async function open(token: string) {
   const request = new Request("http://share.local/", { headers: await headers() });
-  try {
-    return await openSharedRevision(getDb(), token, clientAddressOf(request));
-  } catch (error) {
-    // Expired, revoked, unknown and rate-limited all look the same from outside.
-    if (isAppError(error)) notFound();
-    throw error;
-  }
+  // Expired, revoked, unknown and rate-limited all look the same from outside.
+  return orNotFound(openSharedRevision(getDb(), token, clientAddressOf(request)));
 }
 
 /** Anyone holding the link: one revision, read-only, computed in their own browser. */

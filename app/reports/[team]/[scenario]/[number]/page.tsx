@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { notFound, redirect } from "next/navigation";
+import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 
 import { ConformanceSummary } from "@/components/report/conformance-summary";
@@ -11,7 +11,7 @@ import { SvgChart } from "@/components/report/svg-chart";
 import { CAUTION_TEXT } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
 import { getActor } from "@/lib/auth/session";
-import { isAppError } from "@/lib/errors";
+import { orNotFound } from "@/lib/pages/or-not-found";
 import { loadCalibrationReport } from "@/lib/report/load-report";
 
 export const metadata: Metadata = { title: "Calibration report" };
@@ -31,12 +31,7 @@ async function load(p: Params) {
   const actor = await getActor();
   if (!actor)
     redirect(`/sign-in?next=${encodeURIComponent(`/reports/${p.team}/${p.scenario}/${p.number}`)}`);
-  try {
-    return await loadCalibrationReport(getDb(), actor, p.team, p.scenario, p.number);
-  } catch (error) {
-    if (isAppError(error)) notFound();
-    throw error;
-  }
+  return orNotFound(loadCalibrationReport(getDb(), actor, p.team, p.scenario, p.number));
 }
 
 /** A print-friendly calibration report of one revision: no navigation, static charts, A4 margins. */

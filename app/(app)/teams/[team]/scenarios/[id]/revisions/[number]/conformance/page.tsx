@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 
 import { ConformanceResultTable } from "@/components/conformance/result-table";
 import { ConformanceUploadForm } from "@/components/conformance/upload-form";
@@ -11,22 +10,13 @@ import { can } from "@/lib/auth/permissions";
 import { requireTeamRole } from "@/lib/auth/guard";
 import { conformanceTraces } from "@/lib/conformance/curves";
 import { listConformanceChecks, loadConformanceCheck } from "@/lib/conformance/service";
-import { isAppError } from "@/lib/errors";
+import { orNotFound } from "@/lib/pages/or-not-found";
 import { parseScenarioFileOrThrow } from "@/lib/workspace/parse";
 import { revisionInTeam } from "@/lib/workspace/scope";
 
 export const metadata: Metadata = { title: "Conformance check" };
 
 type Params = { team: string; id: string; number: string };
-
-async function orNotFound<T>(promise: Promise<T>): Promise<T> {
-  try {
-    return await promise;
-  } catch (error) {
-    if (isAppError(error)) notFound();
-    throw error;
-  }
-}
 
 export default async function ConformancePage({
   params,

@@ -1,6 +1,5 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { notFound } from "next/navigation";
 
 import { StudyForm } from "@/components/studies/study-form";
 import { StudyProgress } from "@/components/studies/study-progress";
@@ -9,7 +8,7 @@ import { getDb } from "@/db/index";
 import { listStudiesForTeam } from "@/db/queries/studies";
 import { requireTeamRole } from "@/lib/auth/guard";
 import { can } from "@/lib/auth/permissions";
-import { isAppError } from "@/lib/errors";
+import { orNotFound } from "@/lib/pages/or-not-found";
 import { NUMERIC_PARAMETERS } from "@/lib/studies/schema";
 import { revisionInTeam } from "@/lib/workspace/scope";
 
@@ -30,10 +29,7 @@ export default async function StudyPage({
   const { study } = await searchParams;
   const ctx = await requireTeamRole(team, "team:read");
   const db = getDb();
-  const found = await revisionInTeam(db, ctx.team.id, id, number).catch((error: unknown) => {
-    if (isAppError(error)) notFound();
-    throw error;
-  });
+  const found = await orNotFound(revisionInTeam(db, ctx.team.id, id, number));
   const base = `/teams/${team}/scenarios/${id}/revisions/${number}`;
   const recent = await listStudiesForTeam(db, ctx.team.id);
   return (
