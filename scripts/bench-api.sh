@@ -18,7 +18,7 @@ export SMTP_HOST=127.0.0.1 SMTP_PORT=9
 
 cleanup() {
   trap - INT TERM EXIT
-  [ -n "${PGBIN:-}" ] && pg_cluster_stop "$RUN_DIR/pg"
+  [ -n "${PGBIN:-}" ] && pg_cluster_discard "$RUN_DIR/pg"
   rm -rf "$RUN_DIR"
 }
 trap cleanup EXIT

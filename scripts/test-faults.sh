@@ -22,7 +22,7 @@ export STUDY_WORKER=off MAIL_OUTBOX_INTERVAL_MS=1000
 
 cleanup() {
   trap - INT TERM EXIT
-  [ -n "${PGBIN:-}" ] && pg_cluster_stop "$PG_DIR"
+  [ -n "${PGBIN:-}" ] && pg_cluster_discard "$PG_DIR"
   rm -rf "$RUN_DIR"
 }
 trap cleanup EXIT

@@ -2,12 +2,12 @@
 # The one test command: lint, format, types, unit tests, integration tests on a throwaway
 # PostgreSQL cluster, and browser tests in Debian's Chromium against a production build.
 # Ends with one plain line "N passed, N failed" summed over every suite.
-# Usage: scripts/test.sh [checks] [unit] [integration] [e2e] [faults]   (default: all)
+# Usage: scripts/test.sh [checks] [unit] [integration] [e2e] [faults] [fresh]   (default: all)
 set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
 
-SUITES=${*:-checks unit integration e2e faults}
+SUITES=${*:-checks unit integration e2e faults fresh}
 want() { [[ " $SUITES " == *" $1 "* ]]; }
 
 export NEXT_TELEMETRY_DISABLED=1 NO_COLOR=1 FORCE_COLOR=0
@@ -27,7 +27,7 @@ children=()
 cleanup() {
   for pid in "${children[@]}"; do kill "$pid" 2>/dev/null || true; done
   wait 2>/dev/null || true
-  [ -n "${PGBIN:-}" ] && pg_cluster_stop "$RUN_DIR/pg"
+  [ -n "${PGBIN:-}" ] && pg_cluster_discard "$RUN_DIR/pg"
   rm -rf "$RUN_DIR"
 }
 trap cleanup EXIT
@@ -134,6 +134,19 @@ if want faults; then
   failed=$((failed + ${f:-1}))
   if [ "$rc" -ne 0 ] && [ "${f:-1}" -eq 0 ]; then failed=$((failed + 1)); fi
   [ "$rc" -ne 0 ] && tail -n 30 "$RUN_DIR/faults.log" >&2
+fi
+
+# Fresh start: the README's start command in two fresh clones of HEAD (see the script).
+if want fresh; then
+  log "suite: fresh start"
+  bash scripts/test-fresh-start.sh >"$RUN_DIR/fresh.log" 2>&1
+  rc=$?
+  grep -E '^(ok|FAIL) ' "$RUN_DIR/fresh.log" >&2 || true
+  read -r p f < <(sed -nE 's/^test:fresh-start: passed=([0-9]+) failed=([0-9]+)$/\1 \2/p' "$RUN_DIR/fresh.log" | tail -n 1)
+  passed=$((passed + ${p:-0}))
+  failed=$((failed + ${f:-1}))
+  if [ "$rc" -ne 0 ] && [ "${f:-1}" -eq 0 ]; then failed=$((failed + 1)); fi
+  [ "$rc" -ne 0 ] && tail -n 40 "$RUN_DIR/fresh.log" >&2
 fi
 
 echo "$passed passed, $failed failed"

@@ -20,11 +20,13 @@ apt_install() {
   as_admin env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "$@" >/dev/null
 }
 
-# npm ci when node_modules is missing or older than the lock file.
+# npm ci when node_modules is missing or older than the lock file. --include=dev because the
+# start script exports NODE_ENV=production, under which npm would leave out the devDependencies
+# that migrating, seeding and building need (tsx, drizzle-kit, the Tailwind compiler).
 ensure_node_modules() {
   if [ ! -d node_modules ] || [ package-lock.json -nt node_modules/.package-lock.json ]; then
     log "installing npm packages (npm ci)"
-    npm ci --no-audit --no-fund >/dev/null || die "npm ci failed"
+    npm ci --include=dev --no-audit --no-fund >/dev/null || die "npm ci failed"
   fi
 }
 
@@ -51,9 +53,31 @@ pg_run() {
   if is_root; then runuser -u postgres -- "$@"; else "$@"; fi
 }
 
+# pg_cluster_dir DIR: where the cluster meant for DIR really lives. As root the server runs as
+# the postgres user, which cannot enter a checkout under a folder private to root (/root/...);
+# then the cluster lives in /var/lib/craquelure/pg-<hash of DIR>, and DIR/WHERE says so.
+# Every return names its status: called from a trap handler, a bare `return` would give back the
+# status from before the trap (143 after SIGTERM), and `set -e` would end the cleanup there.
+pg_cluster_dir() {
+  local dir=$1 key
+  if ! is_root; then echo "$dir"; return 0; fi
+  mkdir -p "$dir"
+  # access(2) as postgres: fails unless every folder above DIR may be entered.
+  if runuser -u postgres -- test -x "$(dirname "$dir")" 2>/dev/null; then echo "$dir"; return 0; fi
+  key=$(realpath -m "$dir" | sha1sum | cut -c1-12)
+  echo "/var/lib/craquelure/pg-$key"
+}
+
 # pg_cluster_start DIR PORT [extra server options]: init when new, start when not running.
 pg_cluster_start() {
-  local dir=$1 port=$2 extra=${3:-}
+  local dir extra=${3:-} port=$2
+  dir=$(pg_cluster_dir "$1")
+  if [ "$dir" != "$1" ]; then
+    mkdir -p /var/lib/craquelure
+    chmod 755 /var/lib/craquelure
+    log "the postgres user cannot reach $1; keeping this cluster in $dir"
+    echo "$dir" >"$1/WHERE"
+  fi
   mkdir -p "$dir"
   if is_root; then chown postgres:postgres "$dir"; fi
   if [ ! -f "$dir/data/PG_VERSION" ]; then
@@ -73,9 +97,18 @@ pg_cluster_start() {
 }
 
 pg_cluster_stop() {
-  local dir=$1
+  local dir
+  dir=$(pg_cluster_dir "$1")
   [ -f "$dir/data/postmaster.pid" ] && pg_run "$PGBIN/pg_ctl" -D "$dir/data" -m fast -w stop >/dev/null 2>&1
   return 0
+}
+
+# pg_cluster_discard DIR: stop a throwaway cluster and remove it, wherever it lives.
+pg_cluster_discard() {
+  local dir
+  dir=$(pg_cluster_dir "$1")
+  pg_cluster_stop "$1"
+  rm -rf "$dir" "$1"
 }
 
 # pg_create_db PORT NAME: create the database when it does not exist yet.
