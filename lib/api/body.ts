@@ -50,9 +50,43 @@ export async function readJsonBody(
     if (options.optional) return undefined;
     throw new AppError("invalid:body", "Send a JSON body.");
   }
+  let value: unknown;
   try {
-    return JSON.parse(text);
+    value = JSON.parse(text);
   } catch {
     throw new AppError("invalid:json", "The request body is not valid JSON.");
   }
+  const broken = findBrokenText(value, "");
+  if (broken !== null) {
+    // PostgreSQL refuses such text; saying so here beats a failed save.
+    throw new AppError(
+      "invalid:json",
+      `The text ${broken ? `in “${broken}” ` : ""}holds a broken character (half of a surrogate pair); retype it.`,
+    );
+  }
+  return value;
+}
+
+/** A lone UTF-16 surrogate: `\p{Cs}` matches only unpaired halves in a `u` regex. */
+const LONE_SURROGATE = /\p{Cs}/u;
+
+/** The dotted path of the first string (key or value) with a lone surrogate, or null. */
+function findBrokenText(value: unknown, path: string): string | null {
+  if (typeof value === "string") return LONE_SURROGATE.test(value) ? path : null;
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const found = findBrokenText(value[i], path ? `${path}.${i + 1}` : String(i + 1));
+      if (found !== null) return found;
+    }
+    return null;
+  }
+  if (value && typeof value === "object") {
+    for (const [key, item] of Object.entries(value)) {
+      const at = path ? `${path}.${key}` : key;
+      if (LONE_SURROGATE.test(key)) return path;
+      const found = findBrokenText(item, at);
+      if (found !== null) return found;
+    }
+  }
+  return null;
 }

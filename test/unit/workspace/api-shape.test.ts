@@ -60,6 +60,17 @@ describe("reading a JSON body", () => {
     await expect(readJsonBody(post(null), 100)).rejects.toMatchObject({ code: "invalid:body" });
     expect(await readJsonBody(post(null), 100, { optional: true })).toBeUndefined();
   });
+
+  it("refuses half a surrogate pair, which PostgreSQL cannot store, and names where it is", async () => {
+    await expect(readJsonBody(post('{"name":"\\ud800"}'), 100)).rejects.toThrow(
+      /in “name”.*broken character/,
+    );
+    await expect(readJsonBody(post('{"legs":[{"label":"a\\udc00"}]}'), 100)).rejects.toThrow(
+      /legs\.1\.label/,
+    );
+    // A whole pair (an emoji) is ordinary text.
+    expect(await readJsonBody(post('{"name":"\\ud83d\\ude00"}'), 100)).toEqual({ name: "😀" });
+  });
 });
 
 describe("ids from URLs", () => {
