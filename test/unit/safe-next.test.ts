@@ -21,3 +21,19 @@ describe("redirect target after sign-in", () => {
     }
   });
 });
+
+describe("security: open redirect after sign-in", () => {
+  it.each([
+    "/\t/evil.example/phish",
+    "/\n/evil.example",
+    "/\u0000/x",
+    "/\r//evil.example",
+    "//evil.example",
+    "/\\evil.example",
+  ])("refuses %j", (next) => {
+    expect(safeNextPath(next)).toBe("/teams");
+  });
+  it("keeps a same-origin path with its query", () => {
+    expect(safeNextPath("/teams/abc?tab=sets")).toBe("/teams/abc?tab=sets");
+  });
+});
