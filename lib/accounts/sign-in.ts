@@ -2,7 +2,7 @@ import { eq } from "drizzle-orm";
 
 import type { Db } from "@/db/client";
 import { users, type User } from "@/db/schema/users";
-import { burnPasswordCheck, verifyPassword } from "@/lib/auth/password";
+import { burnPasswordCheck, hashPassword, needsRehash, verifyPassword } from "@/lib/auth/password";
 import { AppError } from "@/lib/errors";
 import { enforceRateLimits, RATE_LIMITS } from "@/lib/rate-limit";
 import { signInSchema } from "@/lib/validations/auth";
@@ -36,10 +36,17 @@ export async function authenticate(
     await burnPasswordCheck(data.password);
     throw new AppError("invalid:credentials", WRONG, "password");
   }
-  const ok = await verifyPassword(data.password, {
-    hash: user.passwordHash,
-    salt: user.passwordSalt,
-  });
+  const stored = { hash: user.passwordHash, salt: user.passwordSalt };
+  const ok = await verifyPassword(data.password, stored);
   if (!ok) throw new AppError("invalid:credentials", WRONG, "password");
+  if (needsRehash(stored)) {
+    // The only moment the plain password is at hand: bring an old record up to today's cost.
+    const fresh = await hashPassword(data.password);
+    await db
+      .update(users)
+      .set({ passwordHash: fresh.hash, passwordSalt: fresh.salt })
+      .where(eq(users.id, user.id));
+    return { ...user, passwordHash: fresh.hash, passwordSalt: fresh.salt };
+  }
   return user;
 }

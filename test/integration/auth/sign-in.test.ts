@@ -1,5 +1,9 @@
+import { scryptSync } from "node:crypto";
+
+import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 
+import { users } from "@/db/schema/users";
 import { authenticate } from "@/lib/accounts/sign-in";
 import { hitRateLimit, RATE_LIMITS } from "@/lib/rate-limit";
 
@@ -96,5 +100,34 @@ describe("sign-in", () => {
         authenticate(db, { email: user.email, password: TEST_PASSWORD }, address, later),
       ),
     ).toBeNull();
+  });
+});
+
+describe("security: passwords (rehash at sign-in)", () => {
+  it("brings a record of the old format up to today's cost at the next successful sign-in", async () => {
+    const user = await makeUser(db);
+    // The format written before self-describing records: hex key, hex salt, N = 2^15, r = 8.
+    const salt = Buffer.from("0123456789abcdef0123456789abcdef", "hex");
+    const key = scryptSync(TEST_PASSWORD.normalize("NFKC"), salt, 64, {
+      N: 2 ** 15,
+      r: 8,
+      p: 1,
+      maxmem: 64 * 1024 * 1024,
+    });
+    await db
+      .update(users)
+      .set({ passwordHash: key.toString("hex"), passwordSalt: salt.toString("hex") })
+      .where(eq(users.id, user.id));
+    await authenticate(db, { email: user.email, password: TEST_PASSWORD }, unique("ip"));
+    const [row] = await db.select().from(users).where(eq(users.id, user.id));
+    expect(row.passwordHash).toMatch(/^\$scrypt\$ln=17,r=8,p=1\$/);
+    expect(row.passwordSalt).toBe("");
+    // And the upgraded record still opens with the same password.
+    const again = await authenticate(
+      db,
+      { email: user.email, password: TEST_PASSWORD },
+      unique("ip"),
+    );
+    expect(again.id).toBe(user.id);
   });
 });
