@@ -87,3 +87,21 @@ export async function findApiTokenByHash(db: Executor, hash: string): Promise<To
 export async function touchApiToken(db: Executor, tokenId: string, at: Date): Promise<void> {
   await db.update(apiTokens).set({ lastUsedAt: at }).where(eq(apiTokens.id, tokenId));
 }
+
+/**
+ * Revokes every live token of a user, or only those bound to one team. A token is a credential
+ * with a reason: a password reset (the account may have been taken over) or leaving a team ends
+ * it, so a later invitation back does not bring old tokens to life.
+ */
+export async function revokeApiTokensOfUser(
+  db: Executor,
+  userId: string,
+  at: Date,
+  teamId?: string,
+): Promise<void> {
+  const live = and(eq(apiTokens.userId, userId), isNull(apiTokens.revokedAt));
+  await db
+    .update(apiTokens)
+    .set({ revokedAt: at })
+    .where(teamId ? and(live, eq(apiTokens.teamId, teamId)) : live);
+}

@@ -4,6 +4,7 @@ import type { Db } from "@/db/client";
 import { sessions } from "@/db/schema/sessions";
 import { passwordResetTokens, users } from "@/db/schema/users";
 import { recordAudit } from "@/lib/audit";
+import { revokeApiTokensOfUser } from "@/db/queries/api-tokens";
 import { hashPassword } from "@/lib/auth/password";
 import { hashToken, looksLikeToken, newToken, tokenState } from "@/lib/auth/tokens";
 import { resetPasswordMessage } from "@/lib/email/templates/reset";
@@ -101,6 +102,7 @@ export async function resetPassword(
     if (!user.verifiedAt)
       await tx.update(users).set({ verifiedAt: now }).where(eq(users.id, row.userId));
     await tx.delete(sessions).where(eq(sessions.userId, row.userId));
+    await revokeApiTokensOfUser(tx, row.userId, now);
     await recordAudit(tx, { actorId: row.userId, action: "account.reset-password" });
     return { userId: row.userId };
   });

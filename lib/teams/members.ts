@@ -1,6 +1,7 @@
 import { and, count, eq } from "drizzle-orm";
 
 import type { Db, Executor } from "@/db/client";
+import { revokeApiTokensOfUser } from "@/db/queries/api-tokens";
 import { memberships, teams } from "@/db/schema/teams";
 import type { Actor } from "@/lib/accounts/actor";
 import { recordAudit } from "@/lib/audit";
@@ -81,6 +82,7 @@ export async function removeMember(db: Db, actor: Actor, input: unknown): Promis
     await tx
       .delete(memberships)
       .where(and(eq(memberships.teamId, ctx.team.id), eq(memberships.userId, data.userId)));
+    await revokeApiTokensOfUser(tx, data.userId, new Date(), ctx.team.id);
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -103,6 +105,7 @@ export async function leaveTeam(db: Db, actor: Actor, input: unknown): Promise<v
     await tx
       .delete(memberships)
       .where(and(eq(memberships.teamId, ctx.team.id), eq(memberships.userId, ctx.actor.id)));
+    await revokeApiTokensOfUser(tx, ctx.actor.id, new Date(), ctx.team.id);
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
