@@ -6,6 +6,14 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
 
+# --demo-mail serves /dev/outbox (every e-mail sent, reset links included) to loopback clients.
+for arg in "$@"; do
+  case $arg in
+    --demo-mail) export CRAQUELURE_DEMO_MAIL=1 ;;
+    *) die "unknown option $arg (known: --demo-mail)" ;;
+  esac
+done
+
 PORT=${PORT:-3000}
 PGPORT=${CRAQUELURE_PG_PORT:-25432}
 SMTP_PORT=${SMTP_PORT:-2525}
@@ -55,6 +63,10 @@ build_if_stale "$DATA_DIR/build.log"
 node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" --keepAliveTimeout 65000 &
 children+=($!)
 wait_for_http "http://127.0.0.1:$PORT/" 60 || die "the app did not answer on port $PORT"
-log "Craquelure is running at http://127.0.0.1:$PORT  (mail outbox: http://127.0.0.1:$PORT/dev/outbox)"
+if [ "${CRAQUELURE_DEMO_MAIL:-}" = 1 ]; then
+  log "Craquelure is running at http://127.0.0.1:$PORT  (demo mail outbox: http://127.0.0.1:$PORT/dev/outbox)"
+else
+  log "Craquelure is running at http://127.0.0.1:$PORT"
+fi
 log "press Ctrl-C to stop"
 wait -n "${children[@]}" || true

@@ -14,7 +14,7 @@ export PG_DIR=$RUN_DIR/pg PGPORT=${FAULTS_PG_PORT:-$((22000 + $$ % 900))}
 export PG_OPTS="-c max_connections=60"
 export FAULTS_APP_PORT=${FAULTS_APP_PORT:-$((29000 + $$ % 900))}
 export SMTP_HOST=127.0.0.1 SMTP_PORT=${FAULTS_SMTP_PORT:-$((27000 + $$ % 900))}
-export MAIL_OUTBOX_DIR=$RUN_DIR/outbox MAIL_FROM="Craquelure faults <faults@craquelure.local>"
+export MAIL_OUTBOX_DIR=$RUN_DIR/outbox CRAQUELURE_DEMO_MAIL=1 MAIL_FROM="Craquelure faults <faults@craquelure.local>"
 export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_faults
 export APP_URL=http://127.0.0.1:$FAULTS_APP_PORT FAULTS_APP_LOG=$RUN_DIR/app.log
 # Studies are not under test here; the queued-mail sender looks every second.

@@ -34,7 +34,8 @@ leftovers() {
   done
 }
 
-status_is_200() { [ "$(node -e "fetch(process.argv[1]).then(r=>console.log(r.status),()=>console.log(0))" "$1")" = 200 ]; }
+http_status() { node -e "fetch(process.argv[1]).then(r=>console.log(r.status),()=>console.log(0))" "$1"; }
+status_is_200() { [ "$(http_status "$1")" = 200 ]; }
 
 # fresh_start NAME PARENT_MODE PORT_OFFSET
 fresh_start() {
@@ -59,6 +60,8 @@ fresh_start() {
   done
   check "$name: / and /sandbox answer 200" [ "$up" = yes ]
   [ "$up" = yes ] || tail -n 30 "$parent.log" >&2
+  # A plain start must not serve the local mail page (only --demo-mail does).
+  check "$name: /dev/outbox answers 404" [ "$(http_status "http://127.0.0.1:$app_port/dev/outbox")" = 404 ]
   kill -TERM "$pid" 2>/dev/null
   for ((i = 0; i < 60; i++)); do kill -0 "$pid" 2>/dev/null || break; sleep 0.5; done
   check "$name: start.sh ends on SIGTERM" bash -c "! kill -0 $pid 2>/dev/null"

@@ -78,7 +78,7 @@ if want integration || want e2e; then
   export DATABASE_URL=postgres://app@127.0.0.1:$PGPORT/craquelure_test
   export SMTP_HOST=127.0.0.1 SMTP_PORT
   export MAIL_FROM="Craquelure tests <tests@craquelure.local>"
-  export MAIL_OUTBOX_DIR=$RUN_DIR/outbox
+  export MAIL_OUTBOX_DIR=$RUN_DIR/outbox CRAQUELURE_DEMO_MAIL=1
   export APP_URL=http://127.0.0.1:$APP_PORT
   mkdir -p "$MAIL_OUTBOX_DIR"
   count_check "migrations apply" npm run --silent db:migrate
