@@ -2,7 +2,7 @@
  * A first guess of which column is which, from English header names (units stripped). The user
  * confirms or corrects it in the mapping step; the guess never decides silently.
  */
-import { headerUnitText } from "./units";
+import { findTrailingUnit } from "./trailing-unit";
 
 export const CHANNELS = [
   "strain",
@@ -30,8 +30,8 @@ const PATTERNS: [Channel, RegExp][] = [
 
 /** Header text without its unit and decoration, lower case. */
 export function headerName(header: string): string {
-  const unit = headerUnitText(header);
-  const bare = unit === null ? header : header.replace(/[[(][^\])]*[\])]\s*$/, "");
+  const unit = findTrailingUnit(header);
+  const bare = unit === null ? header : header.slice(0, unit.open);
   return bare.trim().toLowerCase();
 }
 

@@ -4,6 +4,7 @@ export type CsvErrorCode =
   | "too-large"
   | "too-many-rows"
   | "too-many-columns"
+  | "header-too-long"
   | "delimiter"
   | "quotes"
   | "ragged"

@@ -3,6 +3,8 @@ export const MAX_FILE_BYTES = 10 * 1024 * 1024;
 export const MAX_DATA_ROWS = 200_000;
 /** A coupon curve has a handful of channels; far more means a wrong delimiter or a wrong file. */
 export const MAX_COLUMNS = 64;
+/** A channel name with its unit fits in a few dozen characters; a longer header cell is not one. */
+export const MAX_HEADER_CELL_CHARS = 200;
 
 /** UTF-8 size without allocating an encoded copy (runs in a worker, so no Buffer). */
 export function utf8ByteLength(text: string): number {

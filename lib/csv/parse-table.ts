@@ -8,7 +8,13 @@
 import Papa from "papaparse";
 import { csvError, type CsvError } from "./csv-error";
 import { detectDelimiter, type Delimiter } from "./detect-delimiter";
-import { MAX_COLUMNS, MAX_DATA_ROWS, MAX_FILE_BYTES, utf8ByteLength } from "./limits";
+import {
+  MAX_COLUMNS,
+  MAX_DATA_ROWS,
+  MAX_FILE_BYTES,
+  MAX_HEADER_CELL_CHARS,
+  utf8ByteLength,
+} from "./limits";
 import { looksLikeDecimalComma, parseNumberCell } from "./number-cell";
 
 export interface BadCell {
@@ -123,6 +129,17 @@ class TableBuilder {
       );
     }
     this.hasHeader = cells.some((c) => parseNumberCell(c, this.decimalComma) === null);
+    const longHeader = this.hasHeader
+      ? cells.findIndex((c) => c.trim().length > MAX_HEADER_CELL_CHARS)
+      : -1;
+    if (longHeader >= 0) {
+      const length = cells[longHeader].trim().length.toLocaleString("en-US");
+      return csvError(
+        "header-too-long",
+        `the header of column ${longHeader + 1} is ${length} characters long; at most ${MAX_HEADER_CELL_CHARS} are accepted.`,
+        line,
+      );
+    }
     this.headers = this.hasHeader
       ? cells.map((c, i) => c.trim() || `column ${i + 1}`)
       : cells.map((_, i) => `column ${i + 1}`);

@@ -3,6 +3,8 @@
  * written in the header ("strain [%]", "stress (MPa)") is taken as chosen; otherwise the spec E.1
  * rule detects percent strain and Pa stress from the magnitudes, with a warning.
  */
+import { findTrailingUnit } from "./trailing-unit";
+
 export const STRAIN_UNITS = ["mm/mm", "percent"] as const;
 export const STRESS_UNITS = ["Pa", "kPa", "MPa", "GPa"] as const;
 export type StrainUnit = (typeof STRAIN_UNITS)[number];
@@ -15,8 +17,8 @@ export const STRESS_FACTOR: Record<StressUnit, number> = { Pa: 1e-6, kPa: 1e-3, 
 
 /** The text inside the last [...] or (...) of a header, if any. */
 export function headerUnitText(header: string): string | null {
-  const match = /[[(]([^\])]*)[\])]\s*$/.exec(header.trim());
-  return match ? match[1].trim() : null;
+  const unit = findTrailingUnit(header);
+  return unit ? header.slice(unit.open + 1, unit.close).trim() : null;
 }
 
 export function strainUnitFromHeader(header: string): StrainUnit | null {
