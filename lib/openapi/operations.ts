@@ -41,7 +41,7 @@ export const OPERATIONS: Record<string, Record<string, Op>> = {
       operationId: "runScenario",
       summary: "Run a scenario file with the same core as the command-line driver",
       description:
-        "Answers exactly what `npm run --silent drive -- file.json [--set id] [--format csv|json]` prints. Send the bare scenario file (set and format as query parameters, or the Accept header), or a RunRequest. Any role.",
+        "Answers exactly what `npm run --silent drive -- file.json [--set id] [--format csv|json]` prints. Send the bare scenario file (set and format as query parameters, or the Accept header), or a RunRequest. Any role. Caps: at most 12 parameter sets per scenario file and 1,000,001 rows (1,000,000 increments) per run.",
       parameters: [
         { name: "set", in: "query", schema: { type: "string" } },
         { name: "format", in: "query", schema: { type: "string", enum: ["csv", "json"] } },
@@ -55,7 +55,9 @@ export const OPERATIONS: Record<string, Record<string, Op>> = {
           description: "The run's columns (CSV or JSON as in the command-line contract)",
           content: { ...CSV, ...json({ type: "object" }) },
         },
-        "400": err("The body is not JSON"),
+        "400": err(
+          "The body is not JSON, or a cap is passed (invalid:cap): more than 12 parameter sets per scenario file, or more than 1,000,001 rows per run",
+        ),
         "413": err("More than 1,000,000 increments, or a body over 4 MB"),
         "422": err(
           "The file does not validate (message names the field), or the run exceeded its time budget",

@@ -4,6 +4,7 @@ import { AppError } from "@/lib/errors";
 import { budgetedRunner, runBudgetMs } from "@/lib/runs/budgeted-runner";
 import { readRunRequest } from "@/lib/runs/run-request";
 import { runScenario } from "@/lib/runs/run-scenario";
+import { checkApiCaps } from "@/lib/server/api-caps";
 
 /** Hands the pieces to the client one by one, releasing each once sent. */
 function streamOf(chunks: string[]): ReadableStream<Uint8Array> {
@@ -29,6 +30,7 @@ export const POST = tokenRoute(
     if (!actor) throw new AppError("unauthenticated", "Send a Bearer token or sign in first.");
     const body = await readJsonBody(request, BODY_LIMITS.scenario);
     const run = readRunRequest(body, query, request.headers.get("accept"));
+    checkApiCaps(run.scenario);
     const output = runScenario(run, budgetedRunner(runBudgetMs()));
     const headers: Record<string, string> = {
       "content-type": output.contentType,
