@@ -43,3 +43,11 @@ export function checkApiCaps(scenario: Record<string, unknown>): void {
     );
   }
 }
+
+/** The same caps on a `{ file, … }` body that saves a scenario file (create, new revision). */
+export function checkApiCapsOfSavedFile(body: unknown): void {
+  const file = (body as { file?: unknown } | null)?.file;
+  if (typeof file === "object" && file !== null && !Array.isArray(file)) {
+    checkApiCaps(file as Record<string, unknown>);
+  }
+}

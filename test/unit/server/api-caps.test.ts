@@ -2,7 +2,12 @@ import { describe, expect, it } from "vitest";
 
 import { statusOf } from "@/lib/api/respond";
 import { isAppError } from "@/lib/errors";
-import { API_MAX_PARAMETER_SETS, API_MAX_RUN_ROWS, checkApiCaps } from "@/lib/server/api-caps";
+import {
+  API_MAX_PARAMETER_SETS,
+  API_MAX_RUN_ROWS,
+  checkApiCaps,
+  checkApiCapsOfSavedFile,
+} from "@/lib/server/api-caps";
 
 function sets(n: number) {
   return Array.from({ length: n }, (_, i) => ({ id: `S${i}` }));
@@ -50,5 +55,16 @@ describe("API caps", () => {
   it("leaves malformed files to the schema's own messages", () => {
     expect(refusal({ parameterSets: "many", path: { legs: "long" } })).toBeNull();
     expect(refusal({})).toBeNull();
+  });
+});
+
+describe("API caps on saved files", () => {
+  it("refuses a saved file with 13 parameter sets and ignores bodies without a file", () => {
+    expect(() =>
+      checkApiCapsOfSavedFile({ message: "m", file: { parameterSets: sets(13) } }),
+    ).toThrow("The file has 13 parameter sets; the API accepts at most 12 per scenario file.");
+    expect(() => checkApiCapsOfSavedFile({ file: { parameterSets: sets(12) } })).not.toThrow();
+    expect(() => checkApiCapsOfSavedFile(null)).not.toThrow();
+    expect(() => checkApiCapsOfSavedFile({ file: [] })).not.toThrow();
   });
 });

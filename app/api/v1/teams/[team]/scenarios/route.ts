@@ -1,4 +1,5 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
 import { tokenRoute } from "@/lib/api/token-route";
 import { apiRoute, Created } from "@/lib/api/route";
 import { createScenario, listScenarios } from "@/lib/workspace/scenarios";
@@ -14,5 +15,6 @@ export const GET = tokenRoute<Params>("team:read", ({ db, actor, params, query }
 /** scenario:edit; body CreateScenarioInput → 201 CreateScenarioResponse. */
 export const POST = apiRoute<Params>(async ({ db, actor, params, request }) => {
   const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  checkApiCapsOfSavedFile(body);
   return new Created(await createScenario(db, actor, params.team, body));
 });

@@ -1,4 +1,5 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
 import { tokenRoute } from "@/lib/api/token-route";
 import { apiRoute, Created } from "@/lib/api/route";
 import { listRevisions, saveRevision } from "@/lib/workspace/revisions";
@@ -17,5 +18,6 @@ export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
  */
 export const POST = apiRoute<Params>(async ({ db, actor, params, request }) => {
   const body = await readJsonBody(request, BODY_LIMITS.scenario);
+  checkApiCapsOfSavedFile(body);
   return new Created(await saveRevision(db, actor, params.team, params.scenario, body));
 });
