@@ -20,6 +20,12 @@ const { D1, EPS, PHI, SIG, SIG_D, STATE_SIZE, W, initialState } = StateLayout;
 /** Number of halvings allowed below a user increment (hmin = 2^-12, spec C.7). */
 export const MAX_LEVEL = 12;
 const GRID = 1 << MAX_LEVEL;
+/** outcomes of one user increment */
+const INCREMENT_DONE = 0;
+/** a dcrit failure with onFailure 'stop' ended the path at an accepted sub-step */
+const INCREMENT_STOPPED = 1;
+/** no convergence / limit load at hmin: the state is the last converged sub-step */
+const INCREMENT_FAILED = 2;
 
 export interface PathResult {
   columns: ResultColumns;
@@ -143,7 +149,7 @@ export class PathRun {
       const target = this.targets[3 * li + k];
       this.end[k] = this.inc === n ? target : this.start[k] + (target - this.start[k]) * frac;
     }
-    const ok = this.runIncrement(mask);
+    const outcome = this.runIncrement(mask);
     const row = this.rows;
     this.writer.write(row, li + 1, this.state, this.status.failed ? 1 : 0);
     this.rows++;
@@ -155,7 +161,7 @@ export class PathRun {
     const last = this.leg >= this.counts.length;
     // A failure that ends the path names its row, even on the path's very last increment:
     // readers test `stoppedAtStep !== null` to know the path did not run as scripted.
-    const stopped = !ok || (this.status.failed && !this.m.continueOnFailure);
+    const stopped = outcome !== INCREMENT_DONE;
     if (stopped || last) {
       this.done = true;
       if (stopped) this.status.stoppedAtStep = row;
@@ -165,9 +171,11 @@ export class PathRun {
   /**
    * Sub-steps on the 2^-12 grid of the user increment. Equivalent to the recursive halving of
    * spec C.8: after a success the next attempt is the largest aligned block (the sibling the
-   * recursion would try). Returns false on failure at hmin (the state stays the last converged).
+   * recursion would try). Failure is checked on every accepted sub-step (spec C.7): with 'stop'
+   * the increment ends at the sub-step that reached dcrit (a partial increment). On failure at
+   * hmin the state stays the last converged sub-step.
    */
-  private runIncrement(mask: number): boolean {
+  private runIncrement(mask: number): number {
     let pos = 0;
     let level = 0;
     const sub = this.sub;
@@ -180,24 +188,31 @@ export class PathRun {
         for (let k = 0; k < 3; k++) sub[k] = this.prev[k] + (this.end[k] - this.prev[k]) * f;
       }
       if (this.stepper.step(this.state, mask, sub, this.cand, level === MAX_LEVEL)) {
-        this.accept();
+        if (this.accept()) return INCREMENT_STOPPED;
         pos = next;
         while (level > 0 && (pos & ((GRID >> level) * 2 - 1)) === 0) level--;
       } else if (level === MAX_LEVEL) {
+        // failMode keeps the FIRST failure (a limit load after a break does not overwrite it)
+        if (this.status.failMode === null) {
+          this.status.failMode = mask === 7 ? "no convergence" : "limit load";
+        }
         this.status.failed = true;
-        this.status.failMode = mask === 7 ? "no convergence" : "limit load";
-        return false;
+        return INCREMENT_FAILED;
       } else level++;
     }
-    return true;
+    return INCREMENT_DONE;
   }
 
-  /** Commits the candidate sub-step: failure flags, onFailure, energies, warnings. */
-  private accept(): void {
+  /**
+   * Commits the candidate sub-step: failure flags, onFailure, energies, warnings. Returns true
+   * when a new dcrit failure with onFailure 'stop' ends the path at this sub-step.
+   */
+  private accept(): boolean {
     const m = this.m;
     const c = this.cand;
     const st = this.state;
     let cap = 0;
+    let stop = false;
     for (let i = 0; i < 2; i++) {
       const bit = 1 << i;
       if (c[D1 + i] >= m.dcrit && !(this.failedAxes & bit)) {
@@ -207,6 +222,7 @@ export class PathRun {
           this.status.failMode = `dcrit axis ${i + 1}`;
         }
         if (m.continueOnFailure) cap |= bit;
+        else stop = true;
       }
     }
     if (cap) this.stepper.capAtDmax(st, c, cap);
@@ -229,6 +245,7 @@ export class PathRun {
     this.state = c;
     this.cand = st;
     this.subSteps++;
+    return stop;
   }
 }
 

@@ -16,6 +16,9 @@ const TOL_D = 1e-12;
 const MAX_NEWTON = 30;
 const MAX_HALVINGS = 10;
 const MAX_FIXED_POINT = 200;
+const MAX_SWEEPS = 60;
+const SCAN_INTERVALS = 16;
+const MAX_BISECTIONS = 64;
 
 export class ReducedProblem {
   readonly solver: ElasticSolver;
@@ -28,6 +31,11 @@ export class ReducedProblem {
   dpn2 = 0;
   Hf1 = 0;
   Hf2 = 0;
+  /** broken families (bit mask, spec C.7): no evolution, no coupling into the other family */
+  broken = 0;
+  /** coupling weights in Ybar_1 = Y_1 + bIn1·Y_2 and Ybar_2 = bIn2·Y_1 + Y_2 (b, or 0 once broken) */
+  bIn1 = 0;
+  bIn2 = 0;
   // results of the last evaluation
   d1 = 0;
   d2 = 0;
@@ -55,6 +63,14 @@ export class ReducedProblem {
 
   constructor(private readonly m: Material) {
     this.solver = new ElasticSolver(m);
+    this.setBroken(0);
+  }
+
+  /** Broken families (spec C.7): a broken family's Y no longer enters the other's Ybar. */
+  setBroken(mask: number): void {
+    this.broken = mask;
+    this.bIn1 = mask & 2 ? 0 : this.m.b;
+    this.bIn2 = mask & 1 ? 0 : this.m.b;
   }
 
   /** Solves E(d, dp(d)) and the residual at d (regime search starts from the last one). */
@@ -71,10 +87,11 @@ export class ReducedProblem {
     const Y2 = releaseRate(sd[1], sd[2], m.k6, m.E2, d2);
     this.Y1 = Y1;
     this.Y2 = Y2;
-    this.Yb1 = Y1 + m.b * Y2;
-    this.Yb2 = m.b * Y1 + Y2;
-    const F1 = evolutionF(m, 1, this.Yb1);
-    const F2 = evolutionF(m, 2, this.Yb2);
+    this.Yb1 = Y1 + this.bIn1 * Y2;
+    this.Yb2 = this.bIn2 * Y1 + Y2;
+    // a broken family no longer evolves: F_i := d_i^n makes r_i = d_i − d_i^n
+    const F1 = this.broken & 1 ? this.dn1 : evolutionF(m, 1, this.Yb1);
+    const F2 = this.broken & 2 ? this.dn2 : evolutionF(m, 2, this.Yb2);
     this.F1 = F1;
     this.F2 = F2;
     this.chi1 = F1 > this.dn1 && F1 < m.dmax ? 1 : 0;
@@ -142,6 +159,82 @@ export class ReducedProblem {
   }
 
   /**
+   * Globally convergent fallback of spec C.5 for closure kinks, where Newton and the fixed point
+   * can stall while the regime flips: alternating sweeps, each family in turn set to the smallest
+   * root of its own residual (scan + bisection, the other family's damage held), until both
+   * residuals vanish at one point. Roots are only sought within d_i^n + `span` (the Δd limit);
+   * false when a family has none there or the sweeps do not settle.
+   */
+  solveBracketing(span: number): boolean {
+    let x1 = this.dn1;
+    let x2 = this.dn2;
+    let prevRegime = -1;
+    for (let sweep = 0; sweep < MAX_SWEEPS; sweep++) {
+      this.iterations++;
+      this.evaluate(x1, x2);
+      if (Math.max(Math.abs(this.r1), Math.abs(this.r2)) <= TOL_D) {
+        if (this.solver.regime === prevRegime) return true;
+        prevRegime = this.solver.regime;
+        continue;
+      }
+      prevRegime = this.solver.regime;
+      if (this.r1 !== 0) {
+        x1 = this.smallestRoot(1, x1, x2, span, SCAN_INTERVALS);
+        if (x1 !== x1) return false;
+      }
+      this.evaluate(x1, x2);
+      if (this.r2 !== 0) {
+        x2 = this.smallestRoot(2, x1, x2, span, SCAN_INTERVALS);
+        if (x2 !== x2) return false;
+      }
+    }
+    return false;
+  }
+
+  /**
+   * Smallest root x ≥ d_i^n of r_i along family i (the other family's damage held), within
+   * d_i^n + span (capped at dmax), by a scan of `intervals` equal intervals and bisection; NaN if
+   * r_i stays negative there. r_i is continuous in d (G is C¹ in sig, spec B.3), so bisection
+   * cannot be fooled by a regime flip. Leaves the problem evaluated at the root.
+   */
+  smallestRoot(family: number, d1: number, d2: number, span: number, intervals: number): number {
+    const dn = family === 1 ? this.dn1 : this.dn2;
+    const top = dn + span < this.m.dmax ? dn + span : this.m.dmax;
+    let lo = dn;
+    let hi = NaN;
+    this.evalAlong(family, d1, d2, dn);
+    if (this.residual(family) >= 0) return dn;
+    for (let k = 1; k <= intervals; k++) {
+      const x = k === intervals ? top : dn + ((top - dn) * k) / intervals;
+      this.evalAlong(family, d1, d2, x);
+      if (this.residual(family) >= 0) {
+        hi = x;
+        break;
+      }
+      lo = x;
+    }
+    if (hi !== hi) return NaN;
+    for (let k = 0; k < MAX_BISECTIONS && hi - lo > 1e-16; k++) {
+      const mid = 0.5 * (lo + hi);
+      if (mid <= lo || mid >= hi) break;
+      this.evalAlong(family, d1, d2, mid);
+      if (this.residual(family) >= 0) hi = mid;
+      else lo = mid;
+    }
+    this.evalAlong(family, d1, d2, hi);
+    return hi;
+  }
+
+  private evalAlong(family: number, d1: number, d2: number, x: number): void {
+    if (family === 1) this.evaluate(x, d2);
+    else this.evaluate(d1, x);
+  }
+
+  private residual(family: number): number {
+    return family === 1 ? this.r1 : this.r2;
+  }
+
+  /**
    * Newton direction Δd = −J⁻¹r with the consistent Jacobian of spec C.5 at the evaluated point.
    * J = I − diag(chi·F')·Bb·(gS·Tm·dsigL_dd + gD). Returns false if J is singular.
    */
@@ -173,10 +266,10 @@ export class ReducedProblem {
     const dY2d2 = gs21 * g2[1] + gs22 * g2[2] + (2 * this.Y2) / om2;
     const k1 = this.chi1 ? evolutionSlope(m, 1, this.Yb1) : 0;
     const k2 = this.chi2 ? evolutionSlope(m, 2, this.Yb2) : 0;
-    const j11 = 1 - k1 * (dY1d1 + m.b * dY2d1);
-    const j12 = -k1 * (dY1d2 + m.b * dY2d2);
-    const j21 = -k2 * (m.b * dY1d1 + dY2d1);
-    const j22 = 1 - k2 * (m.b * dY1d2 + dY2d2);
+    const j11 = 1 - k1 * (dY1d1 + this.bIn1 * dY2d1);
+    const j12 = -k1 * (dY1d2 + this.bIn1 * dY2d2);
+    const j21 = -k2 * (this.bIn2 * dY1d1 + dY2d1);
+    const j22 = 1 - k2 * (this.bIn2 * dY1d2 + dY2d2);
     const jac = this.jac;
     jac[0] = j11;
     jac[1] = j12;

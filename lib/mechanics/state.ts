@@ -25,7 +25,9 @@ export const REGIME = 20;
 /** load-frame frozen strain epsP_L */
 export const EPS_P = 21;
 export const PSI = 24;
-export const STATE_SIZE = 25;
+/** broken families (spec C.7, onFailure 'continue'): bit 0 = family 1, bit 1 = family 2 */
+export const BROKEN = 25;
+export const STATE_SIZE = 26;
 
 /** The undamaged, unloaded state at damage-frame angle thetaDeg (degrees). */
 export function initialState(thetaDeg: number): Float64Array {

@@ -11,7 +11,7 @@ import * as StateLayout from "./state";
 
 // Bind imported names once: CommonJS transpilation (tsx, vitest) turns every access to an
 // imported binding into a getter call, which dominates a per-increment loop.
-const { D1, D2, DP1, DP2, EPS, REGIME, TH } = StateLayout;
+const { BROKEN, D1, D2, DP1, DP2, EPS, REGIME, TH } = StateLayout;
 const { evolutionSlope, releaseRate } = Evolution;
 
 /** Step flags the tangent needs: frozen flags Hf and loading flags chi of the converged step. */
@@ -72,12 +72,16 @@ export class TangentKernel {
     const M12 = dot3(gT, 0, bs, 3);
     const M21 = dot3(gT, 3, bs, 0);
     const M22 = dot3(gT, 3, bs, 3) + (2 * Y2) / om2;
-    const k1 = f.chi1 ? evolutionSlope(m, 1, Y1 + m.b * Y2) : 0;
-    const k2 = f.chi2 ? evolutionSlope(m, 2, m.b * Y1 + Y2) : 0;
+    // a broken family (spec C.7) neither evolves nor couples into the other family's Ybar
+    const broken = st[BROKEN];
+    const bIn1 = broken & 2 ? 0 : m.b;
+    const bIn2 = broken & 1 ? 0 : m.b;
+    const k1 = f.chi1 && !(broken & 1) ? evolutionSlope(m, 1, Y1 + bIn1 * Y2) : 0;
+    const k2 = f.chi2 && !(broken & 2) ? evolutionSlope(m, 2, bIn2 * Y1 + Y2) : 0;
     // K = [[k1, k1·b], [k2·b, k2]];  A = I − K·M;  X = A⁻¹·K
     const K11 = k1;
-    const K12 = k1 * m.b;
-    const K21 = k2 * m.b;
+    const K12 = k1 * bIn1;
+    const K21 = k2 * bIn2;
     const K22 = k2;
     const A11 = 1 - (K11 * M11 + K12 * M21);
     const A12 = -(K11 * M12 + K12 * M22);
