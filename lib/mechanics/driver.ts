@@ -15,7 +15,7 @@ import { checkLegs, checkParams, MechanicsInputError } from "./validate";
 
 // Bind imported names once: CommonJS transpilation (tsx, vitest) turns every access to an
 // imported binding into a getter call, which dominates a per-increment loop.
-const { D1, EPS, PHI, SIG, SIG_D, STATE_SIZE, W, initialState } = StateLayout;
+const { D1, EPS, PHI, PSI, SIG, SIG_D, STATE_SIZE, W, initialState } = StateLayout;
 
 /** Number of halvings allowed below a user increment (hmin = 2^-12, spec C.7). */
 export const MAX_LEVEL = 12;
@@ -59,6 +59,8 @@ export class PathRun {
   private readonly end = new Float64Array(3);
   private readonly sub = new Float64Array(3);
   private failedAxes = 0;
+  /** the accepted sub-step's state just before a break (preallocated) */
+  private readonly preBreak = new Float64Array(STATE_SIZE);
   private xcWarned = false;
   private readonly flags = { Hf1: 0, Hf2: 0, chi1: 0, chi2: 0 };
   private readonly ct = new Float64Array(9);
@@ -109,6 +111,13 @@ export class PathRun {
   /** Stops the run between chunks; the rows written so far stay valid. */
   cancel(): void {
     this.done = true;
+  }
+
+  /** Breaks the families in `mask` in the candidate, keeping its pre-break copy. */
+  private breakFamilies(c: Float64Array, mask: number): number {
+    const pre = this.preBreak;
+    for (let k = 0; k < STATE_SIZE; k++) pre[k] = c[k];
+    return this.stepper.breakFamilies(c, mask);
   }
 
   /** Consistent tangent (C.6) of the last accepted sub-step, load frame, row-major 3×3. */
@@ -225,12 +234,6 @@ export class PathRun {
         else stop = true;
       }
     }
-    if (cap) this.stepper.capAtDmax(st, c, cap);
-    const pb = this.stepper.problem;
-    this.flags.Hf1 = pb.Hf1;
-    this.flags.Hf2 = pb.Hf2;
-    this.flags.chi1 = pb.chi1;
-    this.flags.chi2 = pb.chi2;
     // W by the trapezoid rule, Phi by the midpoint formula (spec C.7)
     let dW = 0;
     for (let k = 0; k < 3; k++) {
@@ -238,6 +241,22 @@ export class PathRun {
     }
     c[W] = st[W] + dW;
     c[PHI] = st[PHI] + this.stepper.dPhi;
+    if (cap) {
+      this.failedAxes |= this.breakFamilies(c, cap);
+      // across the break and relaxation (spec C.7): W by the trapezoid, ΔPhi = ΔW − Δpsi
+      const pre = this.preBreak;
+      let dWb = 0;
+      for (let k = 0; k < 3; k++) {
+        dWb += 0.5 * (pre[SIG + k] + c[SIG + k]) * (c[EPS + k] - pre[EPS + k]);
+      }
+      c[W] += dWb;
+      c[PHI] += dWb - (c[PSI] - pre[PSI]);
+    }
+    const pb = this.stepper.problem;
+    this.flags.Hf1 = pb.Hf1;
+    this.flags.Hf2 = pb.Hf2;
+    this.flags.chi1 = pb.chi1;
+    this.flags.chi2 = pb.chi2;
     if (!this.xcWarned && m.Xc === m.Xc && (c[SIG_D] < -m.Xc || c[SIG_D + 1] < -m.Xc)) {
       this.xcWarned = true;
       this.status.warnings.push("compression strength exceeded");

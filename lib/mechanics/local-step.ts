@@ -11,6 +11,7 @@ import * as StateLayout from "./state";
 // Bind imported names once: CommonJS transpilation (tsx, vitest) turns every access to an
 // imported binding into a getter call, which dominates a per-increment loop.
 const {
+  BROKEN,
   D1,
   D2,
   DP1,
@@ -66,6 +67,7 @@ export class LocalStepper {
     pb.Hf1 = 0;
     pb.Hf2 = 0;
     pb.iterations = 0;
+    pb.setBroken(from[BROKEN]);
     this.rejection = "";
     s.setAngle(th);
     s.regime = from[REGIME];
@@ -124,16 +126,51 @@ export class LocalStepper {
   }
 
   /**
-   * onFailure 'continue' (spec C.7): set the failed families (bit mask) to dmax in the step just
-   * accepted into `to`, dp following the step's frozen flag, re-solve at the same targets.
-   * Must follow the accepted `step(from, …, to)` call directly.
+   * onFailure 'continue' (spec C.7): the families in `mask` BREAK in the accepted state `st`
+   * (in place): d_i := dmax, dp_i kept, no further evolution, no coupling into the other
+   * family. At the same prescribed values the elastic sub-problem is re-solved, then a surviving
+   * family that is now loading relaxes to the smallest root of its residual (scan + bisection,
+   * frozen flag of the post-break state, no Δd limit); if that root reaches dcrit it breaks too.
+   * Must follow the accepted `step(…, st)` call directly (same control and targets).
+   * W and Phi are left to the caller (ΔPhi = ΔW − Δpsi across the break). Returns the new mask.
    */
-  capAtDmax(from: Float64Array, to: Float64Array, mask: number): void {
+  breakFamilies(st: Float64Array, mask: number): number {
+    const m = this.m;
     const pb = this.problem;
-    const dmax = this.m.dmax;
-    pb.evaluate(mask & 1 ? dmax : to[D1], mask & 2 ? dmax : to[D2]);
-    this.dPhi = this.dissipation(from);
-    this.finish(from, to, to[TH], to[TH_DEG], to[FRAME_SET]);
+    const s = pb.solver;
+    let broken = st[BROKEN] | mask;
+    pb.dpn1 = st[DP1];
+    pb.dpn2 = st[DP2];
+    pb.dn1 = broken & 1 ? m.dmax : st[D1];
+    pb.dn2 = broken & 2 ? m.dmax : st[D2];
+    pb.Hf1 = 0;
+    pb.Hf2 = 0;
+    pb.setBroken(broken);
+    s.regime = st[REGIME];
+    pb.evaluate(pb.dn1, pb.dn2);
+    const j = broken === 1 ? 2 : broken === 2 ? 1 : 0;
+    if (j !== 0 && (j === 1 ? pb.F1 > pb.dn1 : pb.F2 > pb.dn2)) {
+      if (j === 1) pb.Hf1 = s.sigD[0] > s.tolS ? 1 : 0;
+      else pb.Hf2 = s.sigD[1] > s.tolS ? 1 : 0;
+      const dn = j === 1 ? pb.dn1 : pb.dn2;
+      let root = pb.smallestRoot(j, pb.d1, pb.d2, m.dmax - dn, 64);
+      if (root !== root) root = m.dmax; // r_j(dmax) ≥ 0 always; guard against round-off only
+      if (root >= m.dcrit) {
+        // j keeps its open growth up to the root, then breaks like i (no further dp jump)
+        pb.evaluate(j === 1 ? root : pb.d1, j === 2 ? root : pb.d2);
+        pb.dpn1 = pb.dp1;
+        pb.dpn2 = pb.dp2;
+        pb.Hf1 = 0;
+        pb.Hf2 = 0;
+        pb.dn1 = m.dmax;
+        pb.dn2 = m.dmax;
+        broken = 3;
+        pb.setBroken(broken);
+        pb.evaluate(m.dmax, m.dmax);
+      } else pb.evaluate(j === 1 ? root : pb.d1, j === 2 ? root : pb.d2);
+    }
+    this.finish(st, st, st[TH], st[TH_DEG], st[FRAME_SET]);
+    return broken;
   }
 
   /** Onset test of B.8 / C.4.2 on the trial stress in its principal frame (d = 0, s12 = 0). */
@@ -197,6 +234,7 @@ export class LocalStepper {
     to[Y1] = pb.Y1;
     to[Y2] = pb.Y2;
     to[REGIME] = s.regime;
+    to[BROKEN] = pb.broken;
     to[W] = from[W];
     to[PHI] = from[PHI];
   }

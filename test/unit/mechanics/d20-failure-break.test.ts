@@ -40,3 +40,54 @@ describe("D.20 failure inside a sub-stepped increment ('stop')", () => {
     expect(r.columns.sig22[last(r)]).toBeLessThan(79.49721); // D.4 sigma_max
   });
 });
+
+describe("D.20 the break with onFailure 'continue' (spec C.7)", () => {
+  it("d1 = dmax, dp1 kept, sig11 = E1(1 − dmax)(eps11 − alpha·dp1), W continuous, ΔPhi = −Δpsi", () => {
+    const legs = [
+      leg([E, S, S], [0.0175, 0, 0], 1),
+      leg([E, S, S], [0.02, 0, 0], 50),
+      leg([E, S, S], [-0.005, 0, 0], 50),
+    ];
+    const r = run({ onFailure: "continue" }, legs);
+    const c = r.columns;
+    expect(r.status.failMode).toBe("dcrit axis 1");
+    expect(r.status.stoppedAtStep).toBeNull();
+    expect(r.rows).toBe(102);
+    // the 'stop' run gives the sub-step that reached dcrit: its dp1 must survive the break
+    const stop = run({}, [legs[0]]);
+    const dpAtDcrit = stop.columns.dp1[1];
+    // the integration error of the rows before the break (trapezoid W vs midpoint Phi)
+    const gap = stop.columns.W[1] - stop.columns.psi[1] - stop.columns.Phi[1];
+    for (let i = 1; i < r.rows; i++) {
+      expect(c.d1[i]).toBe(DEMO.dmax);
+      expect(c.dp1[i]).toBe(dpAtDcrit);
+      if (c.sig11[i] > 0) {
+        expectRel(
+          c.sig11[i],
+          DEMO.E1 * (1 - DEMO.dmax) * (c.eps11[i] - DEMO.alpha * dpAtDcrit),
+          1e-9,
+        );
+      }
+      expect(c.Phi[i]).toBeGreaterThanOrEqual(c.Phi[i - 1] - 1e-12 * (1 + c.W[i]));
+      // the break and the linear-elastic rows after it keep W − psi − Phi (the trapezoid is
+      // only inexact on the row that crosses closure, where the slope jumps)
+      if (c.sig11[i] > 0 && c.sig11[i - 1] >= 0) {
+        expect(Math.abs(c.W[i] - c.psi[i] - c.Phi[i] - gap)).toBeLessThanOrEqual(1e-12);
+      }
+    }
+    // the break row: W of the 'stop' row plus the rest of the increment's (strain-controlled)
+    // work; Phi rises by psi_before − psi_after across the break, so W = psi + Phi stays exact
+    // across the break (strain control, ΔW = 0 at the same prescribed values): Phi rises by
+    // psi_before − psi_after; the rest of increment 1 is elastic
+    expectRel(
+      c.Phi[1] - stop.columns.Phi[1],
+      stop.columns.psi[1] - c.psi[1] + (c.W[1] - stop.columns.W[1]),
+      1e-9,
+    );
+    expect(c.Phi[1]).toBeGreaterThan(stop.columns.Phi[1]);
+    // compression at full stiffness E1 once sig11 < 0 (closure)
+    const n = r.rows - 1;
+    expect(c.sig11[n]).toBeLessThan(0);
+    expectRel(c.sig11[n], DEMO.E1 * (-0.005 - DEMO.alpha * dpAtDcrit), 1e-9);
+  });
+});
