@@ -95,15 +95,20 @@ export class LocalStepper {
     // C.4.4: frozen-strain flags from the trial, frozen for the step
     pb.Hf1 = s.sigD[0] > s.tolS ? 1 : 0;
     pb.Hf2 = s.sigD[1] > s.tolS ? 1 : 0;
-    if (!pb.solveNewton() && !pb.solveFixedPoint()) {
-      this.rejection = "newton";
-      return false;
-    }
-    const dd1 = pb.d1 - pb.dn1;
-    const dd2 = pb.d2 - pb.dn2;
-    if (dd1 > DELTA_D_MAX || dd2 > DELTA_D_MAX) {
-      this.rejection = "delta d";
-      return false;
+    const loads = (pb.F1 > pb.dn1 ? 1 : 0) | (pb.F2 > pb.dn2 ? 2 : 0);
+    const converged = pb.solveNewton() || pb.solveFixedPoint();
+    let dd1 = pb.d1 - pb.dn1;
+    let dd2 = pb.d2 - pb.dn2;
+    if (!converged || dd1 > DELTA_D_MAX || dd2 > DELTA_D_MAX) {
+      // C.5: no step is rejected before the globally convergent bracketing fallback has looked
+      // for a root within the Δd limit (Newton may stall at a closure kink, or reach the capped
+      // root d = dmax); then with the loading families' frozen flags flipped (1, 2, both)
+      if (!this.bracket(loads)) {
+        this.rejection = converged ? "delta d" : "newton";
+        return false;
+      }
+      dd1 = pb.d1 - pb.dn1;
+      dd2 = pb.d2 - pb.dn2;
     }
     this.dPhi = this.dissipation(from);
     if (!atMinimum) {
@@ -171,6 +176,26 @@ export class LocalStepper {
     }
     this.finish(st, st, st[TH], st[TH_DEG], st[FRAME_SET]);
     return broken;
+  }
+
+  /**
+   * Bracketing fallback of C.5 with the trial's frozen flags, then with the flags of the loading
+   * families (`loads`, bit mask) flipped: family 1, family 2, both. True when a root within
+   * Δd ≤ DELTA_D_MAX was found (the problem is left evaluated there).
+   */
+  private bracket(loads: number): boolean {
+    const pb = this.problem;
+    const hf1 = pb.Hf1;
+    const hf2 = pb.Hf2;
+    for (let flip = 0; flip < 4; flip++) {
+      if ((flip & loads) !== flip) continue;
+      pb.Hf1 = flip & 1 ? 1 - hf1 : hf1;
+      pb.Hf2 = flip & 2 ? 1 - hf2 : hf2;
+      if (pb.solveBracketing(DELTA_D_MAX)) return true;
+    }
+    pb.Hf1 = hf1;
+    pb.Hf2 = hf2;
+    return false;
   }
 
   /** Onset test of B.8 / C.4.2 on the trial stress in its principal frame (d = 0, s12 = 0). */
