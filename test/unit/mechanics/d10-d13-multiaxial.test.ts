@@ -42,9 +42,18 @@ describe("D.11 pure shear, fixed frame [s,s,e]", () => {
   const gam = (d: number) => tau(d) * (1 / G12 + (2 * k6 * d) / (Em * (1 - d)));
   const dPeak = uniaxial().dPeak;
 
-  it("threshold tau0 = 29.08872, gamma0 = 0.006875517 (spec D.11)", () => {
-    expectRel(tau(0), 29.08872, 1e-6);
-    expectRel(gam(0), 0.006875517, 1e-6);
+  it("threshold tau0 = 29.08872, gamma0 = 0.006875517: the product is elastic up to it (spec D.11)", () => {
+    // shear strain to gamma0·(1 − 1e-6): no damage, tau on the elastic line
+    const below = run({}, [leg([S, S, E], [0, 0, 0.006875517 * (1 - 1e-6)], 20)]);
+    const nb = last(below);
+    expect(below.columns.d1[nb]).toBe(0);
+    expect(below.columns.d2[nb]).toBe(0);
+    expectRel(below.columns.sig12[nb], 29.08872 * (1 - 1e-6), 1e-6);
+    // just above gamma0 both families grow
+    const above = run({}, [leg([S, S, E], [0, 0, 0.006875517 * (1 + 1e-4)], 20)]);
+    const na = last(above);
+    expect(above.columns.d1[na]).toBeGreaterThan(0);
+    expect(above.columns.d2[na]).toBeGreaterThan(0);
   });
 
   it.each([
