@@ -5,14 +5,18 @@ import { DEMO, E, S, expectRel, last, leg, run, uniaxial } from "./helpers";
 const U = uniaxial(DEMO);
 
 describe("D.4 monotonic uniaxial tension [e,s,s], closed form", () => {
-  it("threshold and constants (spec D.4 closed form; table values 7 digits)", () => {
-    expectRel(U.sig0, 33.16625, 1e-6);
-    expectRel(U.eps0, 0.003015113, 1e-6);
-    expectRel(U.k, 0.02747333, 1e-6);
-    expectRel(U.dPeak, 0.432918, 1e-6);
-    expectRel(U.sigMax, 79.49721, 1e-6);
-    expectRel(U.epsOfD(U.dPeak), 0.01490881, 1e-6);
-    expectRel(U.sigOfD(U.dPeak), U.sigMax, 1e-12);
+  it("threshold and peak: the product reaches the spec's numbers (spec D.4, 7 digits)", () => {
+    // elastic up to eps0 = 0.003015113 (sig0 = 33.16625), damage just above it
+    const below = run({}, [leg([E, S, S], [0.003015113 * (1 - 1e-6), 0, 0], 10)]);
+    expect(below.columns.d1[last(below)]).toBe(0);
+    expectRel(below.columns.sig11[last(below)], 33.16625 * (1 - 1e-6), 1e-6);
+    const above = run({}, [leg([E, S, S], [0.003015113 * (1 + 1e-5), 0, 0], 10)]);
+    expect(above.columns.d1[last(above)]).toBeGreaterThan(0);
+    // the peak: d1 = 0.4329180, sig = 79.49721 at eps = 0.01490881
+    const peak = run({}, [leg([E, S, S], [0.01490881, 0, 0], 100)]);
+    const n = last(peak);
+    expectRel(peak.columns.d1[n], 0.432918, 1e-6);
+    expectRel(peak.columns.sig11[n], 79.49721, 1e-6);
   });
 
   // [eps11, d1, sig11, d2, eps22] — spec D.4 table
