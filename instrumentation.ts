@@ -6,14 +6,14 @@ export async function register() {
   if (!process.env.DATABASE_URL || process.env.NEXT_PHASE === "phase-production-build") return;
   try {
     // Mail queued in mail_outbox before a restart goes out without waiting for the next mail.
-    const { startMailOutbox } = await import("./lib/email/outbox-sender");
+    const { startMailOutbox } = await import("./lib/server/email/outbox-sender");
     startMailOutbox();
   } catch (error) {
     console.error("[mail outbox] not started:", error instanceof Error ? error.message : error);
   }
   if (process.env.STUDY_WORKER === "off") return;
   try {
-    const { startAppStudyWorker } = await import("./lib/studies/app-queue");
+    const { startAppStudyWorker } = await import("./lib/server/handoff/studies/app-queue");
     await startAppStudyWorker();
   } catch (error) {
     // The app still serves pages; studies wait in the queue until a worker runs.

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 
-import { isCrossOriginWrite } from "@/lib/origin-check";
-import { newNonce, securityHeaders } from "@/lib/security/headers";
+import { isCrossOriginWrite } from "@/lib/server/http/origin-check";
+import { newNonce, securityHeaders } from "@/lib/server/http/security-headers";
 
 // Next 16's middleware file. Two jobs, both from headers alone (no database work here):
 // refuse state-changing requests from other origins, and attach the security headers with a

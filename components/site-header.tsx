@@ -1,7 +1,7 @@
 import Link from "next/link";
 
 import { signOutAction } from "@/app/(auth)/actions";
-import { getCurrentSession } from "@/lib/auth/session";
+import { getCurrentSession } from "@/lib/server/accounts/auth/session";
 
 /** Name, the three places, and who is signed in. Server-rendered from the session cookie. */
 export async function SiteHeader() {

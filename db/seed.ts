@@ -1,9 +1,9 @@
 import { eq } from "drizzle-orm";
 
-import { hashPassword } from "@/lib/auth/password";
-import type { Role } from "@/lib/auth/permissions";
-import { seedDemoRecords } from "@/lib/records/seed-demo-records";
-import { seedDemoWorkspace } from "@/lib/workspace/seed-demo-workspace";
+import { hashPassword } from "@/lib/server/accounts/auth/password";
+import type { Role } from "@/lib/shared/permissions";
+import { seedDemoRecords } from "@/lib/server/records/seed-demo-records";
+import { seedDemoWorkspace } from "@/lib/server/workspace/seed-demo-workspace";
 
 import { createDb, requireDatabaseUrl } from "./client";
 import { memberships, teams } from "./schema/teams";

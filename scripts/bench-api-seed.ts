@@ -6,14 +6,14 @@ import { sql } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { memberships, teams } from "@/db/schema/teams";
 import { users } from "@/db/schema/users";
-import { hashPassword } from "@/lib/auth/password";
+import { hashPassword } from "@/lib/server/accounts/auth/password";
 
 export const BENCH_SCENARIOS = 10_000;
 export const REVISIONS_PER_SCENARIO = 10;
 
 /**
  * Requests are spread over this many signed-in editors: the API counts requests per person
- * (lib/api/token-route.ts), and one shared session would measure that limiter instead.
+ * (lib/server/http/token-route.ts), and one shared session would measure that limiter instead.
  */
 export const BENCH_USERS = 200;
 

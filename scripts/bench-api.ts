@@ -9,7 +9,7 @@ import os from "node:os";
 import path from "node:path";
 
 import { createDb, requireDatabaseUrl } from "@/db/client";
-import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
+import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
 
 import { measure } from "./bench-api-measure";
 import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";

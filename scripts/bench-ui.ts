@@ -6,15 +6,15 @@
  *   full        every chart drawn with the complete result
  *   longestTask longest main-thread task (PerformanceObserver "longtask") from the edit to full
  * Targets: < 100 ms, < 300 ms, < 50 ms. Reads the page's documented hook window.__craquelure
- * (lib/workbench/instrumentation.ts). Last line: bench:ui: firstPaint=<ms> full=<ms> longestTask=<ms>
+ * (lib/client/workbench/instrumentation.ts). Last line: bench:ui: firstPaint=<ms> full=<ms> longestTask=<ms>
  */
 import { type ChildProcess, execSync, spawn } from "node:child_process";
 import { existsSync } from "node:fs";
 import { chromium, type Page } from "playwright-core";
-import { parsePathText } from "@/lib/path-text/parse-path-text";
-import { defaultWorkbenchState } from "@/lib/workbench/default-scenario";
-import { toScenarioFile } from "@/lib/workbench/scenario-state";
-import { encodeState } from "@/lib/workbench/url-state";
+import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
+import { defaultWorkbenchState } from "@/lib/client/workbench/default-scenario";
+import { toScenarioFile } from "@/lib/client/workbench/scenario-state";
+import { encodeState } from "@/lib/client/workbench/url-state";
 
 const PORT = Number(process.env.BENCH_PORT ?? 3190);
 const EDITS = 6;

@@ -1,12 +1,12 @@
 /// <reference lib="webworker" />
 /**
  * The CSV worker: parses a test-curve file off the main thread for the upload's preview and
- * mapping step. Wiring only; the logic is lib/records/csv-preview.ts (lib/csv underneath).
+ * mapping step. Wiring only; the logic is lib/shared/records/csv-preview.ts (lib/csv underneath).
  */
 import * as Comlink from "comlink";
 
 import type { ColumnMappingInput } from "@/lib/csv/record-schema";
-import { previewCsv } from "@/lib/records/csv-preview";
+import { previewCsv } from "@/lib/shared/records/csv-preview";
 
 const api = {
   preview(text: string, mapping?: ColumnMappingInput) {

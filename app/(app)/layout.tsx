@@ -2,7 +2,7 @@ import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 
 import { SiteHeader } from "@/components/site-header";
-import { getCurrentSession } from "@/lib/auth/session";
+import { getCurrentSession } from "@/lib/server/accounts/auth/session";
 
 // Everything under (app) needs a session. Pages still check team access themselves:
 // a layout does not re-run on every navigation, so it cannot be the only guard.

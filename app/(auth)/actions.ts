@@ -3,18 +3,18 @@
 import { redirect } from "next/navigation";
 
 import { getDb } from "@/db/index";
-import { requestPasswordReset, resetPassword } from "@/lib/accounts/password-reset";
-import { authenticate } from "@/lib/accounts/sign-in";
-import { signUp } from "@/lib/accounts/sign-up";
-import { resendVerification, verifyEmail } from "@/lib/accounts/verify-email";
-import { getClientAddress } from "@/lib/auth/client-address";
-import { endSession, getActor, startSession } from "@/lib/auth/session";
-import { mailDeps } from "@/lib/email/deps";
-import { AppError, runAction, type ActionResult } from "@/lib/errors";
-import { safeNextPath } from "@/lib/safe-next";
+import { requestPasswordReset, resetPassword } from "@/lib/server/accounts/password-reset";
+import { authenticate } from "@/lib/server/accounts/sign-in";
+import { signUp } from "@/lib/server/accounts/sign-up";
+import { resendVerification, verifyEmail } from "@/lib/server/accounts/verify-email";
+import { getClientAddress } from "@/lib/server/accounts/auth/client-address";
+import { endSession, getActor, startSession } from "@/lib/server/accounts/auth/session";
+import { mailDeps } from "@/lib/server/email/deps";
+import { AppError, runAction, type ActionResult } from "@/lib/shared/errors";
+import { safeNextPath } from "@/lib/shared/safe-next";
 
 // Thin wrappers: session, request address and mailer come from the request; the rules live in
-// lib/accounts and are tested there. Every input is re-validated by the service's zod schema.
+// lib/server/accounts and are tested there. Every input is re-validated by the service's zod schema.
 
 export async function signUpAction(input: unknown): Promise<ActionResult> {
   const result = await runAction(async () => {

@@ -1,4 +1,4 @@
-import { OPERATIONS } from "@/lib/openapi/operations";
+import { OPERATIONS } from "@/lib/server/handoff/openapi/operations";
 
 type Op = {
   summary?: string;

@@ -1,8 +1,8 @@
 import { getDb } from "@/db/index";
-import type { SignedInActor } from "@/lib/accounts/actor";
-import { listApiTokens } from "@/lib/api-tokens/manage";
-import { ROLE_LABELS } from "@/lib/auth/permissions";
-import { listTeamsForUser } from "@/lib/teams/queries";
+import type { SignedInActor } from "@/lib/server/accounts/actor";
+import { listApiTokens } from "@/lib/server/accounts/api-tokens/manage";
+import { ROLE_LABELS } from "@/lib/shared/permissions";
+import { listTeamsForUser } from "@/lib/server/teams/queries";
 
 import { Card } from "@/components/ui/card";
 

@@ -3,8 +3,8 @@
 import { useState } from "react";
 
 import { createApiTokenAction } from "@/app/(app)/account/api-token-actions";
-import { ROLE_LABELS, ROLES, type Role } from "@/lib/auth/permissions";
-import { roleWithin } from "@/lib/api-tokens/roles";
+import { ROLE_LABELS, ROLES, type Role } from "@/lib/shared/permissions";
+import { roleWithin } from "@/lib/shared/token-roles";
 
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";

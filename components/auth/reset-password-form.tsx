@@ -5,8 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
-import { resetPasswordSchema } from "@/lib/validations/auth";
+import { MIN_PASSWORD_LENGTH } from "@/lib/shared/password-rules";
+import { resetPasswordSchema } from "@/lib/shared/validations/auth";
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const { form, onSubmit } = useActionForm(resetPasswordSchema, resetPasswordAction, {

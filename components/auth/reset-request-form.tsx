@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { resetRequestSchema } from "@/lib/validations/auth";
+import { resetRequestSchema } from "@/lib/shared/validations/auth";
 
 export function ResetRequestForm() {
   const [sent, setSent] = useState(false);

@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { signInSchema } from "@/lib/validations/auth";
+import { signInSchema } from "@/lib/shared/validations/auth";
 
 export function SignInForm({ next }: { next?: string }) {
   const { form, onSubmit } = useActionForm(signInSchema, (values) => signInAction(values, next));

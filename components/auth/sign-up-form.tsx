@@ -5,8 +5,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { MIN_PASSWORD_LENGTH } from "@/lib/auth/password-rules";
-import { signUpSchema } from "@/lib/validations/auth";
+import { MIN_PASSWORD_LENGTH } from "@/lib/shared/password-rules";
+import { signUpSchema } from "@/lib/shared/validations/auth";
 
 export function SignUpForm() {
   const { form, onSubmit } = useActionForm(signUpSchema, signUpAction);

@@ -4,7 +4,7 @@ import { useState, useTransition } from "react";
 
 import { Button } from "@/components/ui/button";
 import { FormMessage } from "@/components/ui/form-message";
-import type { ActionResult } from "@/lib/errors";
+import type { ActionResult } from "@/lib/shared/errors";
 
 export interface TokenActionButtonProps {
   label: string;

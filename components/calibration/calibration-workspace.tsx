@@ -9,7 +9,7 @@ import type { TestRecordSummary } from "@/db/queries/test-records";
 import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
 import type { RefineResult } from "@/lib/calibration/refine";
 import { FITTABLE, type FittableParam } from "@/lib/calibration/refine-params";
-import type { IdentifyResponse } from "@/lib/records/identify-records";
+import type { IdentifyResponse } from "@/lib/server/records/identify-records";
 
 import { ConstituentsForm, type ElasticEstimate } from "./constituents-form";
 import { DesignCaution } from "./design-caution";

@@ -3,8 +3,8 @@
 import { useState } from "react";
 
 import { Button } from "@/components/ui/button";
-import { elasticStart, type Layout } from "@/lib/micromechanics/starting-values";
-import { volumeFraction } from "@/lib/micromechanics/volume-fraction";
+import { elasticStart, type Layout } from "@/lib/calibration/micromechanics/starting-values";
+import { volumeFraction } from "@/lib/calibration/micromechanics/volume-fraction";
 
 export type ElasticEstimate = ReturnType<typeof elasticStart>;
 

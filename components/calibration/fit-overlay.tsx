@@ -1,7 +1,7 @@
 "use client";
 
 import { CurveChart, type CurveTrace } from "@/components/records/curve-chart";
-import type { OverlayCurve } from "@/lib/records/fits";
+import type { OverlayCurve } from "@/lib/server/records/fits";
 
 /** Each test curve with the law's replay of its strain history drawn over it. */
 export function FitOverlay({ curves }: { curves: OverlayCurve[] }) {

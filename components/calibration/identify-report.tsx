@@ -1,6 +1,6 @@
 "use client";
 
-import type { IdentifyResponse } from "@/lib/records/identify-records";
+import type { IdentifyResponse } from "@/lib/server/records/identify-records";
 
 import { LoopCharts } from "./loop-charts";
 import { LoopTable } from "./loop-table";

@@ -1,8 +1,8 @@
 "use client";
 
 import type { TestRecordInput } from "@/lib/calibration/types";
-import type { TestRecordResponse } from "@/lib/records/records";
-import { toTestRecordInput } from "@/lib/records/stored-points";
+import type { TestRecordResponse } from "@/lib/server/records/records";
+import { toTestRecordInput } from "@/lib/shared/records/stored-points";
 
 /** Loads the chosen records' points for the fit worker (the browser replays them). */
 export async function loadRecordInputs(slug: string, ids: string[]): Promise<TestRecordInput[]> {

@@ -1,4 +1,4 @@
-import type { ConformanceResult } from "@/lib/conformance/types";
+import type { ConformanceResult } from "@/lib/server/handoff/conformance/types";
 
 const num = (x: number) => (x >= Number.MAX_VALUE ? "—" : Number(x.toPrecision(4)).toString());
 

@@ -2,10 +2,10 @@
 
 import { useState } from "react";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { sandboxLinkForSet } from "@/lib/workspace-client/sandbox-link";
-import type { ParameterSetView } from "@/lib/workspace-client/types";
-import { useRenameParameterSet } from "@/lib/workspace-client/use-parameter-sets";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { sandboxLinkForSet } from "@/lib/client/data/sandbox-link";
+import type { ParameterSetView } from "@/lib/client/data/types";
+import { useRenameParameterSet } from "@/lib/client/data/use-parameter-sets";
 
 export interface ParameterSetActionsProps {
   slug: string;

@@ -2,11 +2,11 @@
 
 import { useState } from "react";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
-import { allValues, keyValues, provenanceText } from "@/lib/workspace-client/parameter-set-words";
-import type { ParameterSetListResponse } from "@/lib/workspace-client/types";
-import { useDeleteParameterSet, useParameterSets } from "@/lib/workspace-client/use-parameter-sets";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { formatWhen, personName } from "@/lib/client/data/format";
+import { allValues, keyValues, provenanceText } from "@/lib/client/data/parameter-set-words";
+import type { ParameterSetListResponse } from "@/lib/client/data/types";
+import { useDeleteParameterSet, useParameterSets } from "@/lib/client/data/use-parameter-sets";
 
 import { ParameterSetActions } from "./parameter-set-actions";
 

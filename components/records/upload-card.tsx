@@ -12,7 +12,7 @@ import { CurveChart } from "./curve-chart";
 import { MappingFields } from "./mapping-fields";
 import { MetaFields, type MetaInput, type MetaOutput } from "./meta-fields";
 import { postJson } from "./post-json";
-import { useCsvPreview } from "./use-csv-preview";
+import { useCsvPreview } from "../../workers/use-csv-preview";
 
 export interface UploadCardProps {
   index: number;

@@ -1,4 +1,4 @@
-import type { CalibrationReport } from "@/lib/report/load-report";
+import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
 
 /** The conformance checks recorded on the revision, newest first, with their worst deviations. */
 export function ConformanceSummary({ checks }: { checks: CalibrationReport["checks"] }) {

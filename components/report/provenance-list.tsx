@@ -1,4 +1,4 @@
-import type { SetProvenance } from "@/lib/report/provenance";
+import type { SetProvenance } from "@/lib/server/handoff/report/provenance";
 
 const num = (x: number | null, unit = "") =>
   x === null ? "—" : `${Number(x.toPrecision(3))}${unit}`;

@@ -1,4 +1,4 @@
-import type { CalibrationReport } from "@/lib/report/load-report";
+import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
 
 const VERDICTS: Record<string, string> = {
   draft: "Draft: not submitted for review",

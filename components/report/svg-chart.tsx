@@ -1,4 +1,4 @@
-import type { ChartGeometry } from "@/lib/report/svg-chart";
+import type { ChartGeometry } from "@/lib/server/handoff/report/svg-chart";
 
 const COLOURS = ["#2f7a74", "#b4532a", "#1f2a30", "#8c6d1f", "#5a4a8c", "#3b7a2f"];
 

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 
-import type { NewComment } from "@/lib/workspace-client/optimistic-comments";
+import type { NewComment } from "@/lib/client/data/optimistic-comments";
 
 export interface CommentFormProps {
   idPrefix: string;

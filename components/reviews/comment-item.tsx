@@ -2,9 +2,9 @@
 
 import { useState } from "react";
 
-import { formatWhen, personName } from "@/lib/workspace-client/format";
-import { isPending, type NewComment } from "@/lib/workspace-client/optimistic-comments";
-import type { CommentNode } from "@/lib/workspace-client/types";
+import { formatWhen, personName } from "@/lib/client/data/format";
+import { isPending, type NewComment } from "@/lib/client/data/optimistic-comments";
+import type { CommentNode } from "@/lib/client/data/types";
 
 import { CommentForm } from "./comment-form";
 

@@ -1,9 +1,9 @@
 "use client";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { countComments } from "@/lib/workspace-client/optimistic-comments";
-import type { PersonRef } from "@/lib/workspace-client/types";
-import { useAddComment, useComments } from "@/lib/workspace-client/use-comments";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { countComments } from "@/lib/client/data/optimistic-comments";
+import type { PersonRef } from "@/lib/client/data/types";
+import { useAddComment, useComments } from "@/lib/client/data/use-comments";
 
 import { CommentForm } from "./comment-form";
 import { CommentItem } from "./comment-item";

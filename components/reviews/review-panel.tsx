@@ -5,16 +5,16 @@ import { useState } from "react";
 
 import { ReviewBadge } from "@/components/scenarios/review-badge";
 import { Panel } from "@/components/ui/panel";
-import { MAIL_QUEUED_NOTICE } from "@/lib/email/types";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
+import { MAIL_QUEUED_NOTICE } from "@/lib/shared/mail-types";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { formatWhen, personName } from "@/lib/client/data/format";
 import {
   REVIEW_ACTION_LABELS,
   reviewActionsFor,
   reviewStateLabel,
-} from "@/lib/workspace-client/review-words";
-import type { PersonRef, ReviewState } from "@/lib/workspace-client/types";
-import { useReview, useReviewAction } from "@/lib/workspace-client/use-review";
+} from "@/lib/client/data/review-words";
+import type { PersonRef, ReviewState } from "@/lib/client/data/types";
+import { useReview, useReviewAction } from "@/lib/client/data/use-review";
 
 import { CommentsSection } from "./comments-section";
 

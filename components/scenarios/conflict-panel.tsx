@@ -4,13 +4,13 @@ import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import type { ScenarioFileJson } from "@/lib/workbench/scenario-state";
-import { diffScenarios } from "@/lib/workspace/revision-diff";
-import { apiFetch, messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamApi } from "@/lib/workspace-client/api-urls";
-import type { SaveConflict } from "@/lib/workspace-client/conflict";
-import { formatWhen } from "@/lib/workspace-client/format";
-import type { RevisionResponse } from "@/lib/workspace-client/types";
+import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import { diffScenarios } from "@/lib/shared/revision-diff";
+import { apiFetch, messageOf } from "@/lib/client/data/api-fetch";
+import { teamApi } from "@/lib/client/data/api-urls";
+import type { SaveConflict } from "@/lib/client/data/conflict";
+import { formatWhen } from "@/lib/client/data/format";
+import type { RevisionResponse } from "@/lib/client/data/types";
 
 import { RevisionDiffView } from "./revision-diff-view";
 import { SaveRevisionForm } from "./save-revision-form";

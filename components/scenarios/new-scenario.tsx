@@ -4,12 +4,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 
 import { Workbench } from "@/components/workbench/workbench";
-import { defaultScenario } from "@/lib/workbench/default-scenario";
-import type { ScenarioFileJson } from "@/lib/workbench/scenario-state";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { parseTags } from "@/lib/workspace-client/tags";
-import { useCreateScenario } from "@/lib/workspace-client/use-save-revision";
+import { defaultScenario } from "@/lib/client/workbench/default-scenario";
+import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { parseTags } from "@/lib/client/data/tags";
+import { useCreateScenario } from "@/lib/client/data/use-save-revision";
 
 import { SaveRevisionForm } from "./save-revision-form";
 

@@ -1,4 +1,4 @@
-import { pageCount } from "@/lib/workspace-client/list-query";
+import { pageCount } from "@/lib/client/data/list-query";
 
 export interface PagerProps {
   page: number;

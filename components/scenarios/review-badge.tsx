@@ -1,4 +1,4 @@
-import { reviewStateLabel } from "@/lib/workspace-client/review-words";
+import { reviewStateLabel } from "@/lib/client/data/review-words";
 
 export interface ReviewBadgeProps {
   state: string;

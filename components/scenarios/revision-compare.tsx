@@ -1,7 +1,7 @@
 "use client";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { useRevisionDiff } from "@/lib/workspace-client/use-revisions";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { useRevisionDiff } from "@/lib/client/data/use-revisions";
 
 import { RevisionDiffView } from "./revision-diff-view";
 

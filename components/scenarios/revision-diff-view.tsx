@@ -1,5 +1,5 @@
-import { formatValue } from "@/lib/workspace-client/format";
-import type { FieldChange, RevisionDiff } from "@/lib/workspace-client/types";
+import { formatValue } from "@/lib/client/data/format";
+import type { FieldChange, RevisionDiff } from "@/lib/client/data/types";
 
 export interface RevisionDiffViewProps {
   diff: RevisionDiff;

@@ -4,11 +4,11 @@ import Link from "next/link";
 import { useState } from "react";
 
 import { Panel } from "@/components/ui/panel";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
-import type { RevisionListResponse } from "@/lib/workspace-client/types";
-import { useRevisions } from "@/lib/workspace-client/use-revisions";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { formatWhen, personName } from "@/lib/client/data/format";
+import type { RevisionListResponse } from "@/lib/client/data/types";
+import { useRevisions } from "@/lib/client/data/use-revisions";
 
 import { ReviewBadge } from "./review-badge";
 import { RevisionCompare } from "./revision-compare";

@@ -3,10 +3,10 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { parseTags } from "@/lib/workspace-client/tags";
-import { useDeleteScenario, useUpdateScenario } from "@/lib/workspace-client/use-scenario-details";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { parseTags } from "@/lib/client/data/tags";
+import { useDeleteScenario, useUpdateScenario } from "@/lib/client/data/use-scenario-details";
 
 export interface ScenarioDetailsEditorProps {
   slug: string;

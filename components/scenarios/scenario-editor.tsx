@@ -4,12 +4,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 
 import { Workbench } from "@/components/workbench/workbench";
-import type { OpenedScenario, ScenarioFileJson } from "@/lib/workbench/scenario-state";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { type SaveConflict, saveConflictOf } from "@/lib/workspace-client/conflict";
-import { useSaveRevision } from "@/lib/workspace-client/use-save-revision";
-import { useRecordOverlays } from "@/lib/workspace-client/use-test-records";
+import type { OpenedScenario, ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { type SaveConflict, saveConflictOf } from "@/lib/client/data/conflict";
+import { useSaveRevision } from "@/lib/client/data/use-save-revision";
+import { useRecordOverlays } from "@/lib/client/data/use-test-records";
 
 import { ConflictPanel } from "./conflict-panel";
 import { RecordOverlayPicker } from "./record-overlay-picker";

@@ -2,8 +2,8 @@
 
 import { useState } from "react";
 
-import type { ScenarioListState } from "@/lib/workspace-client/list-query";
-import { REVIEW_STATE_LABELS, REVIEW_STATES } from "@/lib/workspace-client/review-words";
+import type { ScenarioListState } from "@/lib/client/data/list-query";
+import { REVIEW_STATE_LABELS, REVIEW_STATES } from "@/lib/client/data/review-words";
 
 export interface ScenarioFiltersProps {
   state: ScenarioListState;

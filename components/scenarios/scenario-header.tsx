@@ -1,8 +1,8 @@
 import Link from "next/link";
 
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
-import type { RevisionMeta, ScenarioSummary } from "@/lib/workspace-client/types";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { formatWhen, personName } from "@/lib/client/data/format";
+import type { RevisionMeta, ScenarioSummary } from "@/lib/client/data/types";
 
 import { ReviewBadge } from "./review-badge";
 

@@ -4,17 +4,17 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useMemo } from "react";
 
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { formatWhen, personName } from "@/lib/client/data/format";
 import {
   listQueryString,
   parseListState,
   type ScenarioListState,
   toggleSort,
-} from "@/lib/workspace-client/list-query";
-import type { ScenarioListResponse } from "@/lib/workspace-client/types";
-import { useScenarioList } from "@/lib/workspace-client/use-scenario-list";
+} from "@/lib/client/data/list-query";
+import type { ScenarioListResponse } from "@/lib/client/data/types";
+import { useScenarioList } from "@/lib/client/data/use-scenario-list";
 
 import { Pager } from "./pager";
 import { ReviewBadge } from "./review-badge";

@@ -1,4 +1,4 @@
-import type { ScenarioListState } from "@/lib/workspace-client/list-query";
+import type { ScenarioListState } from "@/lib/client/data/list-query";
 
 export interface SortHeaderProps {
   label: string;

@@ -3,13 +3,13 @@
 import { useState } from "react";
 
 import { Panel } from "@/components/ui/panel";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { formatWhen, personName } from "@/lib/client/data/format";
 import {
   useCreateShareLink,
   useRevokeShareLink,
   useShareLinks,
-} from "@/lib/workspace-client/use-share-links";
+} from "@/lib/client/data/use-share-links";
 
 import { NewLinkNotice } from "./new-link-notice";
 

@@ -1,6 +1,6 @@
 import { ReviewBadge } from "@/components/scenarios/review-badge";
-import { formatWhen } from "@/lib/workspace-client/format";
-import type { SharedRevisionResponse } from "@/lib/workspace-client/types";
+import { formatWhen } from "@/lib/client/data/format";
+import type { SharedRevisionResponse } from "@/lib/client/data/types";
 
 export interface SharedRevisionHeaderProps {
   shared: SharedRevisionResponse;

@@ -1,7 +1,7 @@
 "use client";
 
 import { Workbench } from "@/components/workbench/workbench";
-import type { OpenedScenario } from "@/lib/workbench/scenario-state";
+import type { OpenedScenario } from "@/lib/client/workbench/scenario-state";
 
 export interface SharedWorkbenchProps {
   scenario: OpenedScenario;

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { createTeamSchema } from "@/lib/validations/teams";
+import { createTeamSchema } from "@/lib/shared/validations/teams";
 
 export function CreateTeamForm() {
   const { form, onSubmit } = useActionForm(createTeamSchema, createTeamAction);

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { deleteTeamSchema } from "@/lib/validations/teams";
+import { deleteTeamSchema } from "@/lib/shared/validations/teams";
 
 export function DeleteTeamForm({ teamSlug }: { teamSlug: string }) {
   const { form, onSubmit } = useActionForm(deleteTeamSchema, deleteTeamAction, {

@@ -7,9 +7,9 @@ import { Button } from "@/components/ui/button";
 import { Field, FieldError } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import type { Role } from "@/lib/auth/permissions";
-import { MAIL_QUEUED_NOTICE } from "@/lib/email/types";
-import { inviteSchema } from "@/lib/validations/teams";
+import type { Role } from "@/lib/shared/permissions";
+import { MAIL_QUEUED_NOTICE } from "@/lib/shared/mail-types";
+import { inviteSchema } from "@/lib/shared/validations/teams";
 
 import { RoleSelect } from "./role-select";
 

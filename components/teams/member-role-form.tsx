@@ -4,8 +4,8 @@ import { changeRoleAction } from "@/app/(app)/teams/[team]/members/actions";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
 import { useActionForm } from "@/components/ui/use-action-form";
-import type { Role } from "@/lib/auth/permissions";
-import { changeRoleSchema } from "@/lib/validations/teams";
+import type { Role } from "@/lib/shared/permissions";
+import { changeRoleSchema } from "@/lib/shared/validations/teams";
 
 import { RoleSelect } from "./role-select";
 

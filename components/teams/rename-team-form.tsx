@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { useActionForm } from "@/components/ui/use-action-form";
-import { renameTeamSchema } from "@/lib/validations/teams";
+import { renameTeamSchema } from "@/lib/shared/validations/teams";
 
 export function RenameTeamForm({ teamSlug, name }: { teamSlug: string; name: string }) {
   const { form, onSubmit } = useActionForm(renameTeamSchema, renameTeamAction, {

@@ -1,6 +1,6 @@
 import type { SelectHTMLAttributes } from "react";
 
-import { ROLE_LABELS, type Role } from "@/lib/auth/permissions";
+import { ROLE_LABELS, type Role } from "@/lib/shared/permissions";
 
 export interface RoleSelectProps extends SelectHTMLAttributes<HTMLSelectElement> {
   roles: readonly Role[];

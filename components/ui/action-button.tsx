@@ -2,7 +2,7 @@
 
 import { useState, useTransition } from "react";
 
-import type { ActionResult } from "@/lib/errors";
+import type { ActionResult } from "@/lib/shared/errors";
 
 import { Button, type ButtonProps } from "./button";
 import { FieldError } from "./field";

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, type DefaultValues, type FieldValues, type Path } from "react-hook-form";
 import type { z } from "zod";
 
-import type { ActionResult } from "@/lib/errors";
+import type { ActionResult } from "@/lib/shared/errors";
 
 /**
  * react-hook-form + the zod schema the server action also uses. The browser check gives instant

@@ -9,10 +9,10 @@ import {
   type StrainComponent,
   type StressComponent,
   stressStrainDef,
-} from "@/lib/workbench/chart-defs";
-import type { ChartOverlay } from "@/lib/workbench/chart-overlays";
-import type { ResultsStore } from "@/lib/workbench/results-store";
-import type { SetEntry } from "@/lib/workbench/set-list";
+} from "@/lib/client/workbench/chart-defs";
+import type { ChartOverlay } from "@/lib/client/workbench/chart-overlays";
+import type { ResultsStore } from "@/lib/client/workbench/results-store";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 import { StepCursor } from "./step-cursor";
 
 export interface ChartGridProps {

@@ -2,15 +2,15 @@
 
 import { useState } from "react";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import { allSetsCsv, setCsv } from "@/lib/workbench/csv-export";
-import { resultsCsvName, scenarioFileName } from "@/lib/workbench/file-names";
-import type { ResultsStore } from "@/lib/workbench/results-store";
+import { allSetsCsv, setCsv } from "@/lib/client/workbench/csv-export";
+import { resultsCsvName, scenarioFileName } from "@/lib/client/workbench/file-names";
+import type { ResultsStore } from "@/lib/client/workbench/results-store";
 import {
   fromScenario,
   type ScenarioFileJson,
   type WorkbenchState,
-} from "@/lib/workbench/scenario-state";
-import type { SetEntry } from "@/lib/workbench/set-list";
+} from "@/lib/client/workbench/scenario-state";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 import { Cautions } from "./cautions";
 import { downloadText } from "./download";
 

@@ -1,5 +1,5 @@
 import type { MaterialParams } from "@/lib/mechanics/types";
-import { type AxisMeaning, deriveMeanings } from "@/lib/workbench/derived";
+import { type AxisMeaning, deriveMeanings } from "@/lib/client/workbench/derived";
 
 export interface MeaningsPanelProps {
   params: MaterialParams;

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { PARAMETER_FIELDS, type ParameterField } from "@/lib/scenario/parameter-fields";
-import { rangeFor, unitFor } from "@/lib/workbench/field-text";
+import { rangeFor, unitFor } from "@/lib/client/workbench/field-text";
 import {
   type ParameterSet,
   type ParameterSetInput,

@@ -2,9 +2,9 @@
 
 import { useRef, useState } from "react";
 import type { Leg } from "@/lib/mechanics/types";
-import type { PathDoc } from "@/lib/path-text/path-doc";
-import { formatPathTextError, type PathTextError } from "@/lib/path-text/parse-path-text";
-import { PATH_TEMPLATES } from "@/lib/workbench/templates";
+import type { PathDoc } from "@/lib/scenario/path-text/path-doc";
+import { formatPathTextError, type PathTextError } from "@/lib/scenario/path-text/parse-path-text";
+import { PATH_TEMPLATES } from "@/lib/client/workbench/templates";
 import { PathNotationHelp } from "./path-notation-help";
 import { PathPreview } from "./path-preview";
 import { PathTable } from "./path-table";

@@ -1,6 +1,6 @@
 import type { Leg } from "@/lib/mechanics/types";
-import { componentName } from "@/lib/path-text/components";
-import { previewStrips } from "@/lib/workbench/path-preview";
+import { componentName } from "@/lib/scenario/path-text/components";
+import { previewStrips } from "@/lib/client/workbench/path-preview";
 
 export interface PathPreviewProps {
   legs: Leg[];

@@ -1,7 +1,7 @@
 "use client";
 
 import type { ControlKind, Leg } from "@/lib/mechanics/types";
-import type { PathDoc } from "@/lib/path-text/path-doc";
+import type { PathDoc } from "@/lib/scenario/path-text/path-doc";
 import {
   appendLeg,
   appendRepeat,
@@ -11,7 +11,7 @@ import {
   setComponent,
   updateItem,
   updateLeg,
-} from "@/lib/workbench/path-doc-edit";
+} from "@/lib/client/workbench/path-doc-edit";
 import { NumberCell } from "./number-cell";
 
 export interface PathTableProps {

@@ -4,9 +4,9 @@ import { useVirtualizer } from "@tanstack/react-virtual";
 import { useRef, useState } from "react";
 import { useDrawVersion } from "@/components/charts/use-draw-version";
 import { RESULT_COLUMNS } from "@/lib/mechanics/types";
-import type { ResultsStore } from "@/lib/workbench/results-store";
-import { rowsToTsv } from "@/lib/workbench/selection-text";
-import type { SetEntry } from "@/lib/workbench/set-list";
+import type { ResultsStore } from "@/lib/client/workbench/results-store";
+import { rowsToTsv } from "@/lib/client/workbench/selection-text";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 
 export interface ResultsTableProps {
   store: ResultsStore;

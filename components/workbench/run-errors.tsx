@@ -1,8 +1,8 @@
 "use client";
 
 import { useDrawVersion } from "@/components/charts/use-draw-version";
-import type { ResultsStore } from "@/lib/workbench/results-store";
-import type { SetEntry } from "@/lib/workbench/set-list";
+import type { ResultsStore } from "@/lib/client/workbench/results-store";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 
 export interface RunErrorsProps {
   store: ResultsStore;

@@ -1,9 +1,9 @@
 "use client";
 
 import { useState } from "react";
-import { defaultScenario } from "@/lib/workbench/default-scenario";
-import type { OpenedScenario } from "@/lib/workbench/scenario-state";
-import { decodeState, readHash } from "@/lib/workbench/url-state";
+import { defaultScenario } from "@/lib/client/workbench/default-scenario";
+import type { OpenedScenario } from "@/lib/client/workbench/scenario-state";
+import { decodeState, readHash } from "@/lib/client/workbench/url-state";
 import { Workbench } from "./workbench";
 
 function boot(): { scenario: OpenedScenario; error: string[] | null } {

@@ -1,8 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { diffSets } from "@/lib/workbench/set-diff";
-import type { SetEntry } from "@/lib/workbench/set-list";
+import { diffSets } from "@/lib/client/workbench/set-diff";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 
 export interface SetDiffTableProps {
   entries: SetEntry[];

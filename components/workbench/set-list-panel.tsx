@@ -2,10 +2,10 @@
 
 import { useState } from "react";
 import { useDrawVersion } from "@/components/charts/use-draw-version";
-import { PRESETS } from "@/lib/workbench/presets";
-import { MAX_SETS } from "@/lib/workbench/set-colors";
-import type { SetAction, SetEntry } from "@/lib/workbench/set-list";
-import type { ResultsStore } from "@/lib/workbench/results-store";
+import { PRESETS } from "@/lib/client/workbench/presets";
+import { MAX_SETS } from "@/lib/client/workbench/set-colors";
+import type { SetAction, SetEntry } from "@/lib/client/workbench/set-list";
+import type { ResultsStore } from "@/lib/client/workbench/results-store";
 
 export interface SetListPanelProps {
   entries: SetEntry[];

@@ -3,9 +3,9 @@
 import { useEffect, useRef, useState } from "react";
 import type { Leg } from "@/lib/mechanics/types";
 import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
-import { emitEvent } from "@/lib/workbench/instrumentation";
-import { ResultsStore } from "@/lib/workbench/results-store";
-import type { SetEntry } from "@/lib/workbench/set-list";
+import { emitEvent } from "@/lib/client/workbench/instrumentation";
+import { ResultsStore } from "@/lib/client/workbench/results-store";
+import type { SetEntry } from "@/lib/client/workbench/set-list";
 import { SolverPool } from "@/workers/solver-client";
 
 /**

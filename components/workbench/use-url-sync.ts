@@ -1,8 +1,8 @@
 "use client";
 
 import { useEffect } from "react";
-import type { ScenarioFileJson } from "@/lib/workbench/scenario-state";
-import { encodeState, URL_STATE_KEY } from "@/lib/workbench/url-state";
+import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import { encodeState, URL_STATE_KEY } from "@/lib/client/workbench/url-state";
 
 /** Writes the scenario into the address (#s=…) a moment after the last change. */
 export function useUrlSync(file: ScenarioFileJson, enabled: boolean) {

@@ -3,17 +3,17 @@
 import Link from "next/link";
 import { useCallback, useMemo, useReducer, useState } from "react";
 import { Panel } from "@/components/ui/panel";
-import { expandPathDoc } from "@/lib/path-text/path-doc";
+import { expandPathDoc } from "@/lib/scenario/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
-import type { ChartOverlay } from "@/lib/workbench/chart-overlays";
+import type { ChartOverlay } from "@/lib/client/workbench/chart-overlays";
 import {
   fromScenario,
   type OpenedScenario,
   type ScenarioFileJson,
   toScenarioFile,
-} from "@/lib/workbench/scenario-state";
-import { encodeState, URL_STATE_KEY } from "@/lib/workbench/url-state";
-import { initModel, workbenchReducer } from "@/lib/workbench/workbench-reducer";
+} from "@/lib/client/workbench/scenario-state";
+import { encodeState, URL_STATE_KEY } from "@/lib/client/workbench/url-state";
+import { initModel, workbenchReducer } from "@/lib/client/workbench/workbench-reducer";
 import { AboutLaw } from "./about-law";
 import { ChartGrid } from "./chart-grid";
 import { ExportPanel } from "./export-panel";

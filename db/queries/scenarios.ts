@@ -4,7 +4,7 @@ import { alias } from "drizzle-orm/pg-core";
 import type { Executor } from "@/db/client";
 import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { users } from "@/db/schema/users";
-import type { ScenarioListQuery } from "@/lib/validations/workspace";
+import type { ScenarioListQuery } from "@/lib/shared/validations/workspace";
 
 import { personRef } from "./users-view";
 

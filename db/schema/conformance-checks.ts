@@ -9,7 +9,7 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 
-import type { ConformanceResult } from "@/lib/conformance/types";
+import type { ConformanceResult } from "@/lib/server/handoff/conformance/types";
 
 import { scenarioRevisions } from "./scenarios";
 import { teams } from "./teams";

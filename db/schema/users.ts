@@ -9,7 +9,7 @@ export const users = pgTable(
     id: uuid("id").primaryKey().defaultRandom(),
     email: text("email").notNull().unique(),
     name: text("name").notNull(),
-    // A self-describing scrypt record (PHC string, see lib/auth/password.ts); password_salt is
+    // A self-describing scrypt record (PHC string, see lib/server/accounts/auth/password.ts); password_salt is
     // empty for it and holds the hex salt only on rows written before that format.
     passwordHash: text("password_hash").notNull(),
     passwordSalt: text("password_salt").notNull(),

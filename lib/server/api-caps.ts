@@ -1,6 +1,6 @@
 import "server-only";
 
-import { AppError } from "@/lib/errors";
+import { AppError } from "@/lib/shared/errors";
 import { MAX_TOTAL_INCREMENTS } from "@/lib/scenario/path-schema";
 
 /**

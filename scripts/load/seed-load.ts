@@ -4,8 +4,8 @@ import path from "node:path";
 import { sql } from "drizzle-orm";
 
 import type { Db } from "@/db/client";
-import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
-import { hashPassword } from "@/lib/auth/password";
+import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
+import { hashPassword } from "@/lib/server/accounts/auth/password";
 
 export interface LoadSeed {
   teamSlug: string;

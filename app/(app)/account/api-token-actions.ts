@@ -3,9 +3,9 @@
 import { revalidatePath } from "next/cache";
 
 import { getDb } from "@/db/index";
-import { createApiToken, revokeApiToken } from "@/lib/api-tokens/manage";
-import { getActor } from "@/lib/auth/session";
-import { runAction } from "@/lib/errors";
+import { createApiToken, revokeApiToken } from "@/lib/server/accounts/api-tokens/manage";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { runAction } from "@/lib/shared/errors";
 
 /** The secret comes back once, here; the page never shows it again. */
 export async function createApiTokenAction(input: unknown) {

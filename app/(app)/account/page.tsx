@@ -6,7 +6,7 @@ import { ApiTokensCard } from "@/components/api-tokens/api-tokens-card";
 import { TokenActionButton } from "@/components/auth/token-action-button";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
-import { getActor } from "@/lib/auth/session";
+import { getActor } from "@/lib/server/accounts/auth/session";
 
 export const metadata: Metadata = { title: "Account" };
 

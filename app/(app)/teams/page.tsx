@@ -5,9 +5,9 @@ import { CreateTeamForm } from "@/components/teams/create-team-form";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
 import { getDb } from "@/db/index";
-import { ROLE_LABELS } from "@/lib/auth/permissions";
-import { getActor } from "@/lib/auth/session";
-import { listTeamsForUser } from "@/lib/teams/queries";
+import { ROLE_LABELS } from "@/lib/shared/permissions";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { listTeamsForUser } from "@/lib/server/teams/queries";
 
 export const metadata: Metadata = { title: "Teams" };
 

@@ -3,9 +3,9 @@
 import { redirect } from "next/navigation";
 
 import { getDb } from "@/db/index";
-import { getActor } from "@/lib/auth/session";
-import { runAction, type ActionResult } from "@/lib/errors";
-import { acceptInvitation } from "@/lib/teams/accept-invitation";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { runAction, type ActionResult } from "@/lib/shared/errors";
+import { acceptInvitation } from "@/lib/server/teams/accept-invitation";
 
 export async function acceptInvitationAction(token: unknown): Promise<ActionResult<string>> {
   const result = await runAction(

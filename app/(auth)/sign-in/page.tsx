@@ -3,7 +3,7 @@ import Link from "next/link";
 
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { FormMessage } from "@/components/ui/form-message";
-import { safeNextPath } from "@/lib/safe-next";
+import { safeNextPath } from "@/lib/shared/safe-next";
 
 export const metadata: Metadata = { title: "Sign in" };
 

@@ -1,7 +1,11 @@
 import { sql } from "drizzle-orm";
 
 import { getDb } from "@/db/index";
-import { classifyDbError, DB_RETRY_AFTER_SECONDS, DB_UNAVAILABLE_MESSAGE } from "@/lib/db-errors";
+import {
+  classifyDbError,
+  DB_RETRY_AFTER_SECONDS,
+  DB_UNAVAILABLE_MESSAGE,
+} from "@/lib/server/http/db-errors";
 
 /**
  * Public and cheap: 200 when the database answers, 503 with Retry-After when it does not.

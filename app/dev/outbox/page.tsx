@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 
-import { readOutbox } from "@/lib/email/outbox";
-import { getEnv } from "@/lib/env";
+import { readOutbox } from "@/lib/server/email/outbox";
+import { getEnv } from "@/lib/server/access/env";
 import { demoMailStatus } from "@/lib/server/demo-mail-gate";
 
 export const metadata: Metadata = { title: "Outbox (local)", robots: { index: false } };

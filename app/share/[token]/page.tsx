@@ -7,10 +7,10 @@ import { SharedRevisionHeader } from "@/components/share/shared-revision-header"
 import { SharedWorkbenchLoader } from "@/components/share/shared-workbench-loader";
 import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
-import { clientAddressOf } from "@/lib/api/request-actor";
-import { orNotFound } from "@/lib/pages/or-not-found";
+import { clientAddressOf } from "@/lib/server/http/request-actor";
+import { orNotFound } from "@/lib/server/access/or-not-found";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import { openSharedRevision } from "@/lib/workspace/share-view";
+import { openSharedRevision } from "@/lib/server/workspace/share-view";
 
 // The token is the secret: never indexed, never sent on as a Referer.
 export const metadata: Metadata = {

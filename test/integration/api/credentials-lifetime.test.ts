@@ -2,8 +2,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 
 import * as scenariosRoute from "@/app/api/v1/teams/[team]/scenarios/route";
 import { memberships } from "@/db/schema/teams";
-import { requestPasswordReset, resetPassword } from "@/lib/accounts/password-reset";
-import { leaveTeam, removeMember } from "@/lib/teams/members";
+import { requestPasswordReset, resetPassword } from "@/lib/server/accounts/password-reset";
+import { leaveTeam, removeMember } from "@/lib/server/teams/members";
 
 import { openTestDb, recordingMailer, tokenFromLink, unique } from "../support/db";
 import { closeAppPoolAfterAll, callRoute, makeWorld, type World } from "../support/workspace";

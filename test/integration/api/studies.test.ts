@@ -11,9 +11,9 @@ import type { PathRunner } from "@/lib/scenario/drive-command";
 import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
 import { resultsToCsv } from "@/lib/scenario/results-csv";
 import { listStudiesForTeam, listStudyResults } from "@/db/queries/studies";
-import { openStudyQueue } from "@/lib/studies/queue";
-import { getStudy, submitStudy } from "@/lib/studies/service";
-import { startStudyWorker } from "@/lib/studies/worker";
+import { openStudyQueue } from "@/lib/server/handoff/studies/queue";
+import { getStudy, submitStudy } from "@/lib/server/handoff/studies/service";
+import { startStudyWorker } from "@/lib/server/handoff/studies/worker";
 
 import { openTestDb } from "../support/db";
 import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";

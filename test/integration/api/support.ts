@@ -1,7 +1,7 @@
 import type { Db } from "@/db/client";
-import type { SignedInActor } from "@/lib/accounts/actor";
-import { createApiToken } from "@/lib/api-tokens/manage";
-import type { Role } from "@/lib/auth/permissions";
+import type { SignedInActor } from "@/lib/server/accounts/actor";
+import { createApiToken } from "@/lib/server/accounts/api-tokens/manage";
+import type { Role } from "@/lib/shared/permissions";
 
 /** A personal token of `actor` for `team` with `role`; returns the secret. */
 export async function tokenFor(

@@ -3,10 +3,10 @@ import { describe, expect, it } from "vitest";
 
 import { sessions } from "@/db/schema/sessions";
 import { users } from "@/db/schema/users";
-import { requestPasswordReset, resetPassword } from "@/lib/accounts/password-reset";
-import { authenticate } from "@/lib/accounts/sign-in";
-import { createLucia } from "@/lib/auth/lucia";
-import { RATE_LIMITS } from "@/lib/rate-limit";
+import { requestPasswordReset, resetPassword } from "@/lib/server/accounts/password-reset";
+import { authenticate } from "@/lib/server/accounts/sign-in";
+import { createLucia } from "@/lib/server/accounts/auth/lucia";
+import { RATE_LIMITS } from "@/lib/server/access/rate-limit";
 
 import {
   makeUser,

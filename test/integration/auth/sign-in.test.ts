@@ -4,8 +4,8 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 
 import { users } from "@/db/schema/users";
-import { authenticate } from "@/lib/accounts/sign-in";
-import { hitRateLimit, RATE_LIMITS } from "@/lib/rate-limit";
+import { authenticate } from "@/lib/server/accounts/sign-in";
+import { hitRateLimit, RATE_LIMITS } from "@/lib/server/access/rate-limit";
 
 import { makeUser, openTestDb, TEST_PASSWORD, unique } from "../support/db";
 import { failedField, outcome } from "../support/outcome";

@@ -2,8 +2,8 @@ import { eq } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 
 import { emailVerificationTokens, users } from "@/db/schema/users";
-import { signUp } from "@/lib/accounts/sign-up";
-import { verifyEmail } from "@/lib/accounts/verify-email";
+import { signUp } from "@/lib/server/accounts/sign-up";
+import { verifyEmail } from "@/lib/server/accounts/verify-email";
 
 import { openTestDb, recordingMailer, tokenFromLink, unique } from "../support/db";
 import { failedField, outcome } from "../support/outcome";

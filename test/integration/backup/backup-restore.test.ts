@@ -7,7 +7,7 @@ import postgres from "postgres";
 import { describe, expect, it } from "vitest";
 
 import { createDb, requireDatabaseUrl } from "@/db/client";
-import { saveRevision } from "@/lib/workspace/revisions";
+import { saveRevision } from "@/lib/server/workspace/revisions";
 
 import { makeWorld, demoFileWith } from "../support/workspace";
 

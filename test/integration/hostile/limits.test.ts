@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 
 import * as shareRoute from "@/app/api/v1/share/[token]/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
-import { SHARE_MISS_RULE } from "@/lib/workspace/share-view";
+import { SHARE_MISS_RULE } from "@/lib/server/workspace/share-view";
 
 import { openTestDb, unique } from "../support/db";
 import { callRoute, closeAppPoolAfterAll, cookieFor, makeWorld } from "../support/workspace";

@@ -2,10 +2,10 @@ import { eq, inArray } from "drizzle-orm";
 import { describe, expect, it } from "vitest";
 
 import { mailOutbox } from "@/db/schema/mail-outbox";
-import { durableMailer, flushOutbox, retryDelayMs } from "@/lib/email/mail-outbox";
-import type { Mailer, MailMessage } from "@/lib/email/types";
-import { inviteMember } from "@/lib/teams/invitations";
-import { changeReview } from "@/lib/workspace/review";
+import { durableMailer, flushOutbox, retryDelayMs } from "@/lib/server/email/mail-outbox";
+import type { Mailer, MailMessage } from "@/lib/shared/mail-types";
+import { inviteMember } from "@/lib/server/teams/invitations";
+import { changeReview } from "@/lib/server/workspace/review";
 
 import { openTestDb, unique } from "../support/db";
 import { makeWorld } from "../support/workspace";

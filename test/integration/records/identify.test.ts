@@ -2,10 +2,10 @@ import { beforeAll, describe, expect, it } from "vitest";
 
 import { findParameterSetView } from "@/db/queries/parameter-sets";
 import { DEMO_PARAMS, demoCyclicTension } from "@/lib/calibration/demo-curves";
-import { getFit } from "@/lib/records/fits";
-import { identifyRecords } from "@/lib/records/identify-records";
-import { saveFit } from "@/lib/records/save-fit";
-import { uploadTestRecord } from "@/lib/records/upload";
+import { getFit } from "@/lib/server/records/fits";
+import { identifyRecords } from "@/lib/server/records/identify-records";
+import { saveFit } from "@/lib/server/records/save-fit";
+import { uploadTestRecord } from "@/lib/server/records/upload";
 
 import { openTestDb, unique } from "../support/db";
 import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";

@@ -6,9 +6,9 @@ import * as fitsRoute from "@/app/api/v1/teams/[team]/fits/route";
 import * as fileRoute from "@/app/api/v1/teams/[team]/test-records/[record]/file/route";
 import * as recordRoute from "@/app/api/v1/teams/[team]/test-records/[record]/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
-import type { Role } from "@/lib/auth/permissions";
-import { saveFit } from "@/lib/records/save-fit";
-import { uploadTestRecord } from "@/lib/records/upload";
+import type { Role } from "@/lib/shared/permissions";
+import { saveFit } from "@/lib/server/records/save-fit";
+import { uploadTestRecord } from "@/lib/server/records/upload";
 
 import { openTestDb, unique } from "../support/db";
 import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";

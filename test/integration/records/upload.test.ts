@@ -5,8 +5,8 @@ import { beforeAll, describe, expect, it } from "vitest";
 
 import { testRecords } from "@/db/schema/test-records";
 import { MAX_FILE_BYTES } from "@/lib/csv/limits";
-import { getTestRecord } from "@/lib/records/records";
-import { uploadTestRecord } from "@/lib/records/upload";
+import { getTestRecord } from "@/lib/server/records/records";
+import { uploadTestRecord } from "@/lib/server/records/upload";
 
 import { openTestDb } from "../support/db";
 import { makeTeamWithAllRoles, type TeamFixture } from "../support/team";

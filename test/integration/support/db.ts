@@ -4,9 +4,9 @@ import { afterAll } from "vitest";
 
 import { createDb, requireDatabaseUrl, type Db } from "@/db/client";
 import { users } from "@/db/schema/users";
-import type { SignedInActor } from "@/lib/accounts/actor";
-import { hashPassword } from "@/lib/auth/password";
-import type { MailDeps, MailMessage } from "@/lib/email/types";
+import type { SignedInActor } from "@/lib/server/accounts/actor";
+import { hashPassword } from "@/lib/server/accounts/auth/password";
+import type { MailDeps, MailMessage } from "@/lib/shared/mail-types";
 
 // Each test file opens its own small pool on the already-migrated database and closes it after.
 export function openTestDb(): Db {

@@ -1,4 +1,4 @@
-import { isAppError } from "@/lib/errors";
+import { isAppError } from "@/lib/shared/errors";
 
 /** null when the call succeeded, else the expected error's code; unexpected errors propagate. */
 export async function outcome(promise: Promise<unknown>): Promise<string | null> {

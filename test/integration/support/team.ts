@@ -2,9 +2,9 @@ import { eq } from "drizzle-orm";
 
 import type { Db } from "@/db/client";
 import { memberships } from "@/db/schema/teams";
-import type { SignedInActor } from "@/lib/accounts/actor";
-import type { Role } from "@/lib/auth/permissions";
-import { createTeam } from "@/lib/teams/create";
+import type { SignedInActor } from "@/lib/server/accounts/actor";
+import type { Role } from "@/lib/shared/permissions";
+import { createTeam } from "@/lib/server/teams/create";
 
 import { makeUser, unique } from "./db";
 

@@ -4,12 +4,12 @@ import path from "node:path";
 import { afterAll } from "vitest";
 
 import type { Db } from "@/db/client";
-import type { SignedInActor } from "@/lib/accounts/actor";
-import { createLucia, SESSION_COOKIE } from "@/lib/auth/lucia";
-import { addComment } from "@/lib/workspace/comments";
-import { createParameterSet } from "@/lib/workspace/parameter-sets";
-import { createScenario } from "@/lib/workspace/scenarios";
-import { createShareLink } from "@/lib/workspace/share-links";
+import type { SignedInActor } from "@/lib/server/accounts/actor";
+import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
+import { addComment } from "@/lib/server/workspace/comments";
+import { createParameterSet } from "@/lib/server/workspace/parameter-sets";
+import { createScenario } from "@/lib/server/workspace/scenarios";
+import { createShareLink } from "@/lib/server/workspace/share-links";
 
 import { unique } from "./db";
 import { makeTeamWithAllRoles, type TeamFixture } from "./team";

@@ -3,9 +3,9 @@ import { describe, expect, it } from "vitest";
 
 import { auditEvents } from "@/db/schema/audit-events";
 import { invitations } from "@/db/schema/invitations";
-import { acceptInvitation } from "@/lib/teams/accept-invitation";
-import { inviteMember } from "@/lib/teams/invitations";
-import { revokeInvitation } from "@/lib/teams/revoke-invitation";
+import { acceptInvitation } from "@/lib/server/teams/accept-invitation";
+import { inviteMember } from "@/lib/server/teams/invitations";
+import { revokeInvitation } from "@/lib/server/teams/revoke-invitation";
 
 import { makeUser, openTestDb, recordingMailer, tokenFromLink } from "../support/db";
 import { failedField, outcome } from "../support/outcome";

@@ -3,9 +3,9 @@ import { describe, expect, it } from "vitest";
 
 import { auditEvents } from "@/db/schema/audit-events";
 import { memberships, teams } from "@/db/schema/teams";
-import { createTeam } from "@/lib/teams/create";
-import { changeMemberRole, leaveTeam, removeMember } from "@/lib/teams/members";
-import { deleteTeam, renameTeam } from "@/lib/teams/settings";
+import { createTeam } from "@/lib/server/teams/create";
+import { changeMemberRole, leaveTeam, removeMember } from "@/lib/server/teams/members";
+import { deleteTeam, renameTeam } from "@/lib/server/teams/settings";
 
 import { makeUser, openTestDb, unique } from "../support/db";
 import { failedField, outcome } from "../support/outcome";

@@ -3,10 +3,10 @@ import { describe, expect, it } from "vitest";
 
 import { invitations } from "@/db/schema/invitations";
 import { teams } from "@/db/schema/teams";
-import type { Actor } from "@/lib/accounts/actor";
-import { inviteMember } from "@/lib/teams/invitations";
-import { changeMemberRole, removeMember } from "@/lib/teams/members";
-import { deleteTeam, renameTeam } from "@/lib/teams/settings";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { inviteMember } from "@/lib/server/teams/invitations";
+import { changeMemberRole, removeMember } from "@/lib/server/teams/members";
+import { deleteTeam, renameTeam } from "@/lib/server/teams/settings";
 
 import { openTestDb, recordingMailer } from "../support/db";
 import { outcome } from "../support/outcome";
@@ -24,7 +24,7 @@ function actorFor(kind: ActorKind, t: TeamFixture): Actor {
 }
 
 // Written out by hand from product.md's role table (owner: members, roles, deleting the team),
-// not derived from lib/auth/permissions.ts, so a wrong table fails here.
+// not derived from lib/shared/permissions.ts, so a wrong table fails here.
 const EXPECTED_DENIAL: Record<ActorKind, string | null> = {
   owner: null,
   editor: "forbidden:team",

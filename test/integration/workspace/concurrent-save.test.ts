@@ -2,9 +2,9 @@ import { describe, expect, it } from "vitest";
 
 import * as revisionRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/route";
 import * as revisionsRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/route";
-import { isAppError } from "@/lib/errors";
-import { DetailedAppError } from "@/lib/workspace/errors";
-import { getRevision, listRevisions, saveRevision } from "@/lib/workspace/revisions";
+import { isAppError } from "@/lib/shared/errors";
+import { DetailedAppError } from "@/lib/server/workspace/errors";
+import { getRevision, listRevisions, saveRevision } from "@/lib/server/workspace/revisions";
 
 import { openTestDb } from "../support/db";
 import {

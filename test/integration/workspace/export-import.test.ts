@@ -2,15 +2,15 @@ import { describe, expect, it } from "vitest";
 
 import * as exportRoute from "@/app/api/v1/teams/[team]/export/route";
 
-import { addComment, editComment } from "@/lib/workspace/comments";
-import { exportTeam } from "@/lib/workspace/export";
-import type { TeamExport } from "@/lib/workspace/export-schema";
-import { importTeam } from "@/lib/workspace/import";
-import { createParameterSet, updateParameterSet } from "@/lib/workspace/parameter-sets";
-import { changeReview } from "@/lib/workspace/review";
-import { saveRevision } from "@/lib/workspace/revisions";
-import { createScenario } from "@/lib/workspace/scenarios";
-import { createTeam } from "@/lib/teams/create";
+import { addComment, editComment } from "@/lib/server/workspace/comments";
+import { exportTeam } from "@/lib/server/workspace/export";
+import type { TeamExport } from "@/lib/server/workspace/export-schema";
+import { importTeam } from "@/lib/server/workspace/import";
+import { createParameterSet, updateParameterSet } from "@/lib/server/workspace/parameter-sets";
+import { changeReview } from "@/lib/server/workspace/review";
+import { saveRevision } from "@/lib/server/workspace/revisions";
+import { createScenario } from "@/lib/server/workspace/scenarios";
+import { createTeam } from "@/lib/server/teams/create";
 
 import { openTestDb, recordingMailer, unique } from "../support/db";
 import { outcome } from "../support/outcome";

@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
 
 import * as reviewRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/review/route";
-import { listAuditLog } from "@/lib/workspace/audit-log";
-import { addComment } from "@/lib/workspace/comments";
-import { updateParameterSet } from "@/lib/workspace/parameter-sets";
-import { changeReview } from "@/lib/workspace/review";
-import { saveRevision } from "@/lib/workspace/revisions";
-import { updateScenario } from "@/lib/workspace/scenarios";
-import { revokeShareLink } from "@/lib/workspace/share-links";
+import { listAuditLog } from "@/lib/server/workspace/audit-log";
+import { addComment } from "@/lib/server/workspace/comments";
+import { updateParameterSet } from "@/lib/server/workspace/parameter-sets";
+import { changeReview } from "@/lib/server/workspace/review";
+import { saveRevision } from "@/lib/server/workspace/revisions";
+import { updateScenario } from "@/lib/server/workspace/scenarios";
+import { revokeShareLink } from "@/lib/server/workspace/share-links";
 import { readMail } from "@/test/e2e/support/mail";
 
 import { openTestDb, recordingMailer } from "../support/db";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { changeReview, reviewHistory } from "@/lib/workspace/review";
-import { saveRevision } from "@/lib/workspace/revisions";
+import { changeReview, reviewHistory } from "@/lib/server/workspace/review";
+import { saveRevision } from "@/lib/server/workspace/revisions";
 
 import { makeUser, openTestDb, recordingMailer } from "../support/db";
 import { outcome } from "../support/outcome";

@@ -22,8 +22,8 @@ import { revisionComments } from "@/db/schema/comments";
 import { parameterSets } from "@/db/schema/parameter-sets";
 import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { shareLinks } from "@/db/schema/share-links";
-import { changeReview } from "@/lib/workspace/review";
-import { exportTeam } from "@/lib/workspace/export";
+import { changeReview } from "@/lib/server/workspace/review";
+import { exportTeam } from "@/lib/server/workspace/export";
 
 import { recordingMailer } from "../support/db";
 import { demoFileWith, SET_VALUES, type World } from "../support/workspace";

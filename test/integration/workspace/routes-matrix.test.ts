@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 
-import type { Actor } from "@/lib/accounts/actor";
+import type { Actor } from "@/lib/server/accounts/actor";
 
 import { openTestDb } from "../support/db";
 import {

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
-import { changeReview } from "@/lib/workspace/review";
-import { saveRevision } from "@/lib/workspace/revisions";
-import { createScenario, listScenarios, updateScenario } from "@/lib/workspace/scenarios";
+import { changeReview } from "@/lib/server/workspace/review";
+import { saveRevision } from "@/lib/server/workspace/revisions";
+import { createScenario, listScenarios, updateScenario } from "@/lib/server/workspace/scenarios";
 
 import { openTestDb, recordingMailer } from "../support/db";
 import { demoFileWith, makeWorld } from "../support/workspace";

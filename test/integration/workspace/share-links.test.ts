@@ -5,8 +5,12 @@ import { describe, expect, it } from "vitest";
 
 import * as shareRoute from "@/app/api/v1/share/[token]/route";
 import { shareLinks } from "@/db/schema/share-links";
-import { createShareLink, listShareLinks, revokeShareLink } from "@/lib/workspace/share-links";
-import { SHARE_GONE_MESSAGE, SHARE_MISS_RULE } from "@/lib/workspace/share-view";
+import {
+  createShareLink,
+  listShareLinks,
+  revokeShareLink,
+} from "@/lib/server/workspace/share-links";
+import { SHARE_GONE_MESSAGE, SHARE_MISS_RULE } from "@/lib/server/workspace/share-view";
 
 import { openTestDb, unique } from "../support/db";
 import { callRoute, closeAppPoolAfterAll, DEMO_FILE, makeWorld } from "../support/workspace";

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { statusOf } from "@/lib/api/respond";
-import { isAppError } from "@/lib/errors";
+import { statusOf } from "@/lib/server/http/respond";
+import { isAppError } from "@/lib/shared/errors";
 import {
   API_MAX_PARAMETER_SETS,
   API_MAX_RUN_ROWS,

@@ -50,8 +50,10 @@ vi.mock("next/navigation", () => ({
     throw new Error("NEXT_NOT_FOUND");
   },
 }));
-vi.mock("@/lib/env", () => ({ getEnv: () => ({ MAIL_OUTBOX_DIR: "/nonexistent-outbox" }) }));
-vi.mock("@/lib/email/outbox", () => ({ readOutbox: async () => [] }));
+vi.mock("@/lib/server/access/env", () => ({
+  getEnv: () => ({ MAIL_OUTBOX_DIR: "/nonexistent-outbox" }),
+}));
+vi.mock("@/lib/server/email/outbox", () => ({ readOutbox: async () => [] }));
 
 describe("/dev/outbox page", () => {
   beforeEach(() => {

@@ -1,8 +1,8 @@
 import Link from "next/link";
 
-import { NOT_FOUND_MESSAGE } from "@/lib/teams/access";
+import { NOT_FOUND_MESSAGE } from "@/lib/server/access/team-access";
 
-// Unknown team and someone else's team look the same on purpose (lib/teams/access.ts).
+// Unknown team and someone else's team look the same on purpose (lib/server/access/team-access.ts).
 export default function TeamNotFound() {
   return (
     <div className="mx-auto max-w-md space-y-4 py-12 text-center">

@@ -3,9 +3,9 @@ import Link from "next/link";
 
 import { Card } from "@/components/ui/card";
 import { getDb } from "@/db/index";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { ROLE_LABELS } from "@/lib/auth/permissions";
-import { listMembers } from "@/lib/teams/queries";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { ROLE_LABELS } from "@/lib/shared/permissions";
+import { listMembers } from "@/lib/server/teams/queries";
 
 import { TeamNav } from "./team-nav";
 

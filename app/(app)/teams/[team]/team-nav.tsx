@@ -1,6 +1,6 @@
 import Link from "next/link";
 
-import { can, ROLE_LABELS, type Role } from "@/lib/auth/permissions";
+import { can, ROLE_LABELS, type Role } from "@/lib/shared/permissions";
 
 /** Team name, the viewer's role, and links to the team's pages. */
 export function TeamNav({ slug, name, role }: { slug: string; name: string; role: Role }) {

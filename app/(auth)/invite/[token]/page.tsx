@@ -4,10 +4,10 @@ import Link from "next/link";
 import { TokenActionButton } from "@/components/auth/token-action-button";
 import { FormMessage } from "@/components/ui/form-message";
 import { getDb } from "@/db/index";
-import { ROLE_LABELS } from "@/lib/auth/permissions";
-import { getActor } from "@/lib/auth/session";
-import { isAppError } from "@/lib/errors";
-import { findInvitation, type InvitationView } from "@/lib/teams/accept-invitation";
+import { ROLE_LABELS } from "@/lib/shared/permissions";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { isAppError } from "@/lib/shared/errors";
+import { findInvitation, type InvitationView } from "@/lib/server/teams/accept-invitation";
 
 import { acceptInvitationAction } from "../actions";
 

@@ -4,8 +4,8 @@ import Link from "next/link";
 import { ResetPasswordForm } from "@/components/auth/reset-password-form";
 import { FormMessage } from "@/components/ui/form-message";
 import { getDb } from "@/db/index";
-import { checkResetToken } from "@/lib/accounts/password-reset";
-import { isAppError } from "@/lib/errors";
+import { checkResetToken } from "@/lib/server/accounts/password-reset";
+import { isAppError } from "@/lib/shared/errors";
 
 export const metadata: Metadata = { title: "Choose a new password", referrer: "no-referrer" };
 

@@ -1,4 +1,4 @@
-import { openApiDocument } from "@/lib/openapi/document";
+import { openApiDocument } from "@/lib/server/handoff/openapi/document";
 
 /** Public: the document describes the API, it grants nothing. */
 export function GET(): Response {

@@ -1,9 +1,9 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { tokenRoute } from "@/lib/api/token-route";
-import { AppError } from "@/lib/errors";
-import { budgetedRunner, runBudgetMs } from "@/lib/runs/budgeted-runner";
-import { readRunRequest } from "@/lib/runs/run-request";
-import { runScenario } from "@/lib/runs/run-scenario";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { AppError } from "@/lib/shared/errors";
+import { budgetedRunner, runBudgetMs } from "@/lib/server/handoff/runs/budgeted-runner";
+import { readRunRequest } from "@/lib/server/handoff/runs/run-request";
+import { runScenario } from "@/lib/server/handoff/runs/run-scenario";
 import { checkApiCaps } from "@/lib/server/api-caps";
 
 /** Hands the pieces to the client one by one, releasing each once sent. */

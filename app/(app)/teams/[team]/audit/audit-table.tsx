@@ -3,11 +3,11 @@
 import { useState } from "react";
 
 import { Pager } from "@/components/scenarios/pager";
-import { messageOf } from "@/lib/workspace-client/api-fetch";
-import { describeAuditEvent } from "@/lib/workspace-client/audit-words";
-import { formatWhen, personName } from "@/lib/workspace-client/format";
-import type { AuditLogResponse } from "@/lib/workspace-client/types";
-import { useAuditLog } from "@/lib/workspace-client/use-audit-log";
+import { messageOf } from "@/lib/client/data/api-fetch";
+import { describeAuditEvent } from "@/lib/client/data/audit-words";
+import { formatWhen, personName } from "@/lib/client/data/format";
+import type { AuditLogResponse } from "@/lib/client/data/types";
+import { useAuditLog } from "@/lib/client/data/use-audit-log";
 
 // The audit route's default page size, so the server's first page and the client agree.
 export const AUDIT_PAGE_SIZE = 50;

@@ -3,7 +3,7 @@ import type { Metadata } from "next";
 import { QueryProvider } from "@/components/providers/query-provider";
 import { getDb } from "@/db/index";
 import { listAuditEventsForTeam } from "@/db/queries/audit-log";
-import { requireTeamRole } from "@/lib/auth/guard";
+import { requireTeamRole } from "@/lib/server/access/guard";
 
 import { TeamNav } from "../team-nav";
 import { AuditTable, AUDIT_PAGE_SIZE } from "./audit-table";

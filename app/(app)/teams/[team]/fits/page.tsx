@@ -3,8 +3,8 @@ import Link from "next/link";
 
 import { getDb } from "@/db/index";
 import { listFitsForTeam } from "@/db/queries/fits";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
 
 import { TeamNav } from "../team-nav";
 

@@ -4,14 +4,14 @@ import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 
 import { getDb } from "@/db/index";
-import { getActor } from "@/lib/auth/session";
-import { mailDeps } from "@/lib/email/deps";
-import { runAction, type ActionResult } from "@/lib/errors";
-import { inviteMember } from "@/lib/teams/invitations";
-import { changeMemberRole, leaveTeam, removeMember } from "@/lib/teams/members";
-import { revokeInvitation } from "@/lib/teams/revoke-invitation";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { mailDeps } from "@/lib/server/email/deps";
+import { runAction, type ActionResult } from "@/lib/shared/errors";
+import { inviteMember } from "@/lib/server/teams/invitations";
+import { changeMemberRole, leaveTeam, removeMember } from "@/lib/server/teams/members";
+import { revokeInvitation } from "@/lib/server/teams/revoke-invitation";
 
-// Each service authorizes the actor for its own capability (lib/teams/access.ts), so a forged
+// Each service authorizes the actor for its own capability (lib/server/access/team-access.ts), so a forged
 // team slug, user id or role in the payload is refused there, not trusted here.
 
 function slugOf(input: unknown): string {

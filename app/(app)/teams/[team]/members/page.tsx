@@ -5,9 +5,9 @@ import { MemberRoleForm } from "@/components/teams/member-role-form";
 import { ActionButton } from "@/components/ui/action-button";
 import { Card } from "@/components/ui/card";
 import { getDb } from "@/db/index";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can, canGrant, grantableRoles, ROLE_LABELS } from "@/lib/auth/permissions";
-import { listMembers, listOpenInvitations } from "@/lib/teams/queries";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can, canGrant, grantableRoles, ROLE_LABELS } from "@/lib/shared/permissions";
+import { listMembers, listOpenInvitations } from "@/lib/server/teams/queries";
 
 import { TeamNav } from "../team-nav";
 import { leaveTeamAction, removeMemberAction, revokeInvitationAction } from "./actions";

@@ -4,8 +4,8 @@ import { ParameterSetsTable } from "@/components/parameter-sets/parameter-sets-t
 import { QueryProvider } from "@/components/providers/query-provider";
 import { getDb } from "@/db/index";
 import { listParameterSetsForTeam } from "@/db/queries/parameter-sets";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
 
 import { TeamNav } from "../team-nav";
 

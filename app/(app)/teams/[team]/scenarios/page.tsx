@@ -6,12 +6,12 @@ import { ScenariosTable } from "@/components/scenarios/scenarios-table";
 import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
 import { listScenariosForTeam } from "@/db/queries/scenarios";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
-import { listMembers } from "@/lib/teams/queries";
-import { scenarioListQuerySchema } from "@/lib/validations/workspace";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { listQueryString, PAGE_SIZE, parseListState } from "@/lib/workspace-client/list-query";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
+import { listMembers } from "@/lib/server/teams/queries";
+import { scenarioListQuerySchema } from "@/lib/shared/validations/workspace";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { listQueryString, PAGE_SIZE, parseListState } from "@/lib/client/data/list-query";
 
 import { TeamNav } from "../team-nav";
 

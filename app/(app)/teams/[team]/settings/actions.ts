@@ -4,9 +4,9 @@ import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 
 import { getDb } from "@/db/index";
-import { getActor } from "@/lib/auth/session";
-import { runAction, type ActionResult } from "@/lib/errors";
-import { deleteTeam, renameTeam } from "@/lib/teams/settings";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { runAction, type ActionResult } from "@/lib/shared/errors";
+import { deleteTeam, renameTeam } from "@/lib/server/teams/settings";
 
 export async function renameTeamAction(input: unknown): Promise<ActionResult> {
   const result = await runAction(async () => {

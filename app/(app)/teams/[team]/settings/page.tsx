@@ -3,8 +3,8 @@ import type { Metadata } from "next";
 import { DeleteTeamForm } from "@/components/teams/delete-team-form";
 import { RenameTeamForm } from "@/components/teams/rename-team-form";
 import { Card } from "@/components/ui/card";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
 
 import { TeamNav } from "../team-nav";
 

@@ -5,8 +5,8 @@ import { RecordsTable } from "@/components/records/records-table";
 import { UploadPanel } from "@/components/records/upload-panel";
 import { getDb } from "@/db/index";
 import { listTestRecordsForTeam } from "@/db/queries/test-records";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
 
 import { TeamNav } from "../team-nav";
 

@@ -1,7 +1,7 @@
 import { getDb } from "@/db/index";
-import { clientAddressOf } from "@/lib/api/request-actor";
-import { errorResponse, jsonResponse } from "@/lib/api/respond";
-import { openSharedRevision } from "@/lib/workspace/share-view";
+import { clientAddressOf } from "@/lib/server/http/request-actor";
+import { errorResponse, jsonResponse } from "@/lib/server/http/respond";
+import { openSharedRevision } from "@/lib/server/workspace/share-view";
 
 /**
  * Public: anyone holding the token reads that one revision (SharedRevisionResponse).

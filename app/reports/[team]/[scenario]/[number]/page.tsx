@@ -10,9 +10,9 @@ import { ReviewSection } from "@/components/report/review-section";
 import { SvgChart } from "@/components/report/svg-chart";
 import { CAUTION_TEXT } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
-import { getActor } from "@/lib/auth/session";
-import { orNotFound } from "@/lib/pages/or-not-found";
-import { loadCalibrationReport } from "@/lib/report/load-report";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { orNotFound } from "@/lib/server/access/or-not-found";
+import { loadCalibrationReport } from "@/lib/server/handoff/report/load-report";
 
 export const metadata: Metadata = { title: "Calibration report" };
 

@@ -6,9 +6,9 @@ import { FitOverlay } from "@/components/calibration/fit-overlay";
 import { LoopTable } from "@/components/calibration/loop-table";
 import { ParamsTable } from "@/components/calibration/params-table";
 import { getDb } from "@/db/index";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { isAppError } from "@/lib/errors";
-import { getFit } from "@/lib/records/fits";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { isAppError } from "@/lib/shared/errors";
+import { getFit } from "@/lib/server/records/fits";
 
 import { TeamNav } from "../../team-nav";
 

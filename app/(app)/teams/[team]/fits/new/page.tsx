@@ -3,7 +3,7 @@ import type { Metadata } from "next";
 import { CalibrationWorkspace } from "@/components/calibration/calibration-workspace";
 import { getDb } from "@/db/index";
 import { listTestRecordsForTeam } from "@/db/queries/test-records";
-import { requireTeamRole } from "@/lib/auth/guard";
+import { requireTeamRole } from "@/lib/server/access/guard";
 
 import { TeamNav } from "../../team-nav";
 

@@ -6,7 +6,7 @@ import type { Db } from "@/db/client";
 import { findRevisionRow, listRevisionsOfScenario } from "@/db/queries/revisions";
 import { findScenarioSummary } from "@/db/queries/scenarios";
 import { parseScenarioFile, type Scenario } from "@/lib/scenario/scenario-schema";
-import type { OpenedScenario } from "@/lib/workbench/scenario-state";
+import type { OpenedScenario } from "@/lib/client/workbench/scenario-state";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const NUMBER = /^[1-9][0-9]{0,8}$/;

@@ -9,11 +9,11 @@ import { ScenarioEditorLoader } from "@/components/scenarios/scenario-editor-loa
 import { ScenarioHeader } from "@/components/scenarios/scenario-header";
 import { ShareLinksPanel } from "@/components/share/share-links-panel";
 import { getDb } from "@/db/index";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
-import { getActor } from "@/lib/auth/session";
-import { teamPages } from "@/lib/workspace-client/api-urls";
-import { overlayRevisions, samePath } from "@/lib/workspace-client/overlay";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
+import { getActor } from "@/lib/server/accounts/auth/session";
+import { teamPages } from "@/lib/client/data/api-urls";
+import { overlayRevisions, samePath } from "@/lib/client/data/overlay";
 
 import { loadScenarioPage, revisionParam } from "./load-scenario";
 

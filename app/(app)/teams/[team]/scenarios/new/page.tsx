@@ -3,8 +3,8 @@ import Link from "next/link";
 
 import { QueryProvider } from "@/components/providers/query-provider";
 import { NewScenarioLoader } from "@/components/scenarios/new-scenario-loader";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { teamPages } from "@/lib/workspace-client/api-urls";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { teamPages } from "@/lib/client/data/api-urls";
 
 export const metadata: Metadata = { title: "New scenario" };
 

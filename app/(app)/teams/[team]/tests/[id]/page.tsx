@@ -4,8 +4,8 @@ import { notFound } from "next/navigation";
 import { CurveChart } from "@/components/records/curve-chart";
 import { getDb } from "@/db/index";
 import { findTestRecordPoints, findTestRecordSummary } from "@/db/queries/test-records";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { thinForDisplay } from "@/lib/records/stored-points";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { thinForDisplay } from "@/lib/shared/records/stored-points";
 
 import { TeamNav } from "../../team-nav";
 

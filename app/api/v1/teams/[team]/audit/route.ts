@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { listAuditLog } from "@/lib/workspace/audit-log";
+import { apiRoute } from "@/lib/server/http/route";
+import { listAuditLog } from "@/lib/server/workspace/audit-log";
 
 type Params = { team: string };
 

@@ -1,6 +1,6 @@
-import { jsonResponse } from "@/lib/api/respond";
-import { apiRoute } from "@/lib/api/route";
-import { exportTeam } from "@/lib/workspace/export";
+import { jsonResponse } from "@/lib/server/http/respond";
+import { apiRoute } from "@/lib/server/http/route";
+import { exportTeam } from "@/lib/server/workspace/export";
 
 type Params = { team: string };
 

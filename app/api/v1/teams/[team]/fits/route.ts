@@ -1,7 +1,7 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
-import { listFits } from "@/lib/records/fits";
-import { saveFit } from "@/lib/records/save-fit";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { listFits } from "@/lib/server/records/fits";
+import { saveFit } from "@/lib/server/records/save-fit";
 
 type Params = { team: string };
 

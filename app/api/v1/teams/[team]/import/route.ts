@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
-import { importTeam } from "@/lib/workspace/import";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { importTeam } from "@/lib/server/workspace/import";
 
 type Params = { team: string };
 

@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
-import { createParameterSet, listParameterSets } from "@/lib/workspace/parameter-sets";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { createParameterSet, listParameterSets } from "@/lib/server/workspace/parameter-sets";
 
 type Params = { team: string };
 

@@ -1,13 +1,13 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
 import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
-import { tokenRoute } from "@/lib/api/token-route";
-import { apiRoute, Created } from "@/lib/api/route";
-import { createScenario, listScenarios } from "@/lib/workspace/scenarios";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { createScenario, listScenarios } from "@/lib/server/workspace/scenarios";
 
 type Params = { team: string };
 
 /** team:read → ScenarioListResponse (query: sort, dir, tag, review, author, q, page, pageSize). */
-// Also open to personal API tokens of this team (lib/api/token-route.ts).
+// Also open to personal API tokens of this team (lib/server/http/token-route.ts).
 export const GET = tokenRoute<Params>("team:read", ({ db, actor, params, query }) =>
   listScenarios(db, actor, params.team, query),
 );

@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { listShareLinks } from "@/lib/workspace/share-links";
+import { apiRoute } from "@/lib/server/http/route";
+import { listShareLinks } from "@/lib/server/workspace/share-links";
 
 type Params = { team: string };
 

@@ -1,8 +1,8 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { Created } from "@/lib/api/route";
-import { tokenRoute } from "@/lib/api/token-route";
-import { getStudyQueue } from "@/lib/studies/app-queue";
-import { submitStudy } from "@/lib/studies/service";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { Created } from "@/lib/server/http/route";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { getStudyQueue } from "@/lib/server/handoff/studies/app-queue";
+import { submitStudy } from "@/lib/server/handoff/studies/service";
 
 type Params = { team: string };
 

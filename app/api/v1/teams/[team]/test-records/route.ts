@@ -1,8 +1,8 @@
-import { readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
+import { readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
 import { MAX_FILE_BYTES } from "@/lib/csv/limits";
-import { listTestRecords } from "@/lib/records/records";
-import { uploadTestRecord } from "@/lib/records/upload";
+import { listTestRecords } from "@/lib/server/records/records";
+import { uploadTestRecord } from "@/lib/server/records/upload";
 
 type Params = { team: string };
 

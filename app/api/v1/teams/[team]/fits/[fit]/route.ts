@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { getFit } from "@/lib/records/fits";
+import { apiRoute } from "@/lib/server/http/route";
+import { getFit } from "@/lib/server/records/fits";
 
 type Params = { team: string; fit: string };
 

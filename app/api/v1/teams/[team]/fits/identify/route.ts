@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute } from "@/lib/api/route";
-import { identifyRecords } from "@/lib/records/identify-records";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute } from "@/lib/server/http/route";
+import { identifyRecords } from "@/lib/server/records/identify-records";
 
 type Params = { team: string };
 

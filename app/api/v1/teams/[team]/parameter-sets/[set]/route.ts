@@ -1,10 +1,10 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute } from "@/lib/api/route";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute } from "@/lib/server/http/route";
 import {
   deleteParameterSet,
   getParameterSet,
   updateParameterSet,
-} from "@/lib/workspace/parameter-sets";
+} from "@/lib/server/workspace/parameter-sets";
 
 type Params = { team: string; set: string };
 

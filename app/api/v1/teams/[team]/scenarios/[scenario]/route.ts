@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute } from "@/lib/api/route";
-import { deleteScenario, getScenario, updateScenario } from "@/lib/workspace/scenarios";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute } from "@/lib/server/http/route";
+import { deleteScenario, getScenario, updateScenario } from "@/lib/server/workspace/scenarios";
 
 type Params = { team: string; scenario: string };
 

@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { revokeShareLink } from "@/lib/workspace/share-links";
+import { apiRoute } from "@/lib/server/http/route";
+import { revokeShareLink } from "@/lib/server/workspace/share-links";
 
 type Params = { team: string; link: string };
 

@@ -1,5 +1,5 @@
-import { tokenRoute } from "@/lib/api/token-route";
-import { getStudy } from "@/lib/studies/service";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { getStudy } from "@/lib/server/handoff/studies/service";
 
 type Params = { team: string; study: string };
 

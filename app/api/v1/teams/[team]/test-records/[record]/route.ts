@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { getTestRecord } from "@/lib/records/records";
+import { apiRoute } from "@/lib/server/http/route";
+import { getTestRecord } from "@/lib/server/records/records";
 
 type Params = { team: string; record: string };
 

@@ -1,5 +1,5 @@
-import { apiRoute } from "@/lib/api/route";
-import { diffRevisions } from "@/lib/workspace/diff-revisions";
+import { apiRoute } from "@/lib/server/http/route";
+import { diffRevisions } from "@/lib/server/workspace/diff-revisions";
 
 type Params = { team: string; scenario: string };
 

@@ -1,13 +1,13 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
 import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
-import { tokenRoute } from "@/lib/api/token-route";
-import { apiRoute, Created } from "@/lib/api/route";
-import { listRevisions, saveRevision } from "@/lib/workspace/revisions";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { listRevisions, saveRevision } from "@/lib/server/workspace/revisions";
 
 type Params = { team: string; scenario: string };
 
 /** team:read → RevisionListResponse (newest first). */
-// Also open to personal API tokens of this team (lib/api/token-route.ts).
+// Also open to personal API tokens of this team (lib/server/http/token-route.ts).
 export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
   listRevisions(db, actor, params.team, params.scenario),
 );

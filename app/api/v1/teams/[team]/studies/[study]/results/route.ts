@@ -1,5 +1,5 @@
-import { tokenRoute } from "@/lib/api/token-route";
-import { studyResultsZip } from "@/lib/studies/service";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { studyResultsZip } from "@/lib/server/handoff/studies/service";
 
 type Params = { team: string; study: string };
 

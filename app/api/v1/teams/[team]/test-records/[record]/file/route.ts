@@ -1,7 +1,7 @@
 import { getDb } from "@/db/index";
-import { actorFromRequest } from "@/lib/api/request-actor";
-import { errorResponse } from "@/lib/api/respond";
-import { getTestRecordFile } from "@/lib/records/records";
+import { actorFromRequest } from "@/lib/server/http/request-actor";
+import { errorResponse } from "@/lib/server/http/respond";
+import { getTestRecordFile } from "@/lib/server/records/records";
 
 type Params = { team: string; record: string };
 

@@ -6,13 +6,16 @@ import { ConformanceUploadForm } from "@/components/conformance/upload-form";
 import { CurveChart } from "@/components/records/curve-chart";
 import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
-import { can } from "@/lib/auth/permissions";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { conformanceTraces } from "@/lib/conformance/curves";
-import { listConformanceChecks, loadConformanceCheck } from "@/lib/conformance/service";
-import { orNotFound } from "@/lib/pages/or-not-found";
-import { parseScenarioFileOrThrow } from "@/lib/workspace/parse";
-import { revisionInTeam } from "@/lib/workspace/scope";
+import { can } from "@/lib/shared/permissions";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { conformanceTraces } from "@/lib/server/handoff/conformance/curves";
+import {
+  listConformanceChecks,
+  loadConformanceCheck,
+} from "@/lib/server/handoff/conformance/service";
+import { orNotFound } from "@/lib/server/access/or-not-found";
+import { parseScenarioFileOrThrow } from "@/lib/server/workspace/parse";
+import { revisionInTeam } from "@/lib/server/access/scope";
 
 export const metadata: Metadata = { title: "Conformance check" };
 

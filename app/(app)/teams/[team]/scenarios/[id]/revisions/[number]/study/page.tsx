@@ -6,11 +6,11 @@ import { StudyProgress } from "@/components/studies/study-progress";
 import { Cautions } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
 import { listStudiesForTeam } from "@/db/queries/studies";
-import { requireTeamRole } from "@/lib/auth/guard";
-import { can } from "@/lib/auth/permissions";
-import { orNotFound } from "@/lib/pages/or-not-found";
-import { NUMERIC_PARAMETERS } from "@/lib/studies/schema";
-import { revisionInTeam } from "@/lib/workspace/scope";
+import { requireTeamRole } from "@/lib/server/access/guard";
+import { can } from "@/lib/shared/permissions";
+import { orNotFound } from "@/lib/server/access/or-not-found";
+import { NUMERIC_PARAMETERS } from "@/lib/server/handoff/studies/schema";
+import { revisionInTeam } from "@/lib/server/access/scope";
 
 export const metadata: Metadata = { title: "Parameter study" };
 

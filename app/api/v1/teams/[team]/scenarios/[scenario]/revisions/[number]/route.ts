@@ -1,10 +1,10 @@
-import { tokenRoute } from "@/lib/api/token-route";
-import { getRevision } from "@/lib/workspace/revisions";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { getRevision } from "@/lib/server/workspace/revisions";
 
 type Params = { team: string; scenario: string; number: string };
 
 /** team:read → RevisionResponse (meta + the stored scenario file). */
-// Also open to personal API tokens of this team (lib/api/token-route.ts).
+// Also open to personal API tokens of this team (lib/server/http/token-route.ts).
 export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
   getRevision(db, actor, params.team, params.scenario, params.number),
 );

@@ -1,5 +1,5 @@
-import { tokenRoute } from "@/lib/api/token-route";
-import { referenceBundle } from "@/lib/bundle/service";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { referenceBundle } from "@/lib/server/handoff/bundle/service";
 
 type Params = { team: string; scenario: string; number: string };
 

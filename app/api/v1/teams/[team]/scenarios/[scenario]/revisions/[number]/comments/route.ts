@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
-import { addComment, listComments } from "@/lib/workspace/comments";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { addComment, listComments } from "@/lib/server/workspace/comments";
 
 type Params = { team: string; scenario: string; number: string };
 

@@ -1,7 +1,10 @@
-import { readJsonBody } from "@/lib/api/body";
-import { Created } from "@/lib/api/route";
-import { tokenRoute } from "@/lib/api/token-route";
-import { createConformanceCheck, listConformanceChecks } from "@/lib/conformance/service";
+import { readJsonBody } from "@/lib/server/http/body";
+import { Created } from "@/lib/server/http/route";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import {
+  createConformanceCheck,
+  listConformanceChecks,
+} from "@/lib/server/handoff/conformance/service";
 
 type Params = { team: string; scenario: string; number: string };
 

@@ -1,7 +1,7 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute } from "@/lib/api/route";
-import { mailDeps } from "@/lib/email/deps";
-import { changeReview, reviewHistory } from "@/lib/workspace/review";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute } from "@/lib/server/http/route";
+import { mailDeps } from "@/lib/server/email/deps";
+import { changeReview, reviewHistory } from "@/lib/server/workspace/review";
 
 type Params = { team: string; scenario: string; number: string };
 

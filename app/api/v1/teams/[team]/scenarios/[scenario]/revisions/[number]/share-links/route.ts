@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute, Created } from "@/lib/api/route";
-import { createShareLink } from "@/lib/workspace/share-links";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute, Created } from "@/lib/server/http/route";
+import { createShareLink } from "@/lib/server/workspace/share-links";
 
 type Params = { team: string; scenario: string; number: string };
 

@@ -1,6 +1,6 @@
-import { BODY_LIMITS, readJsonBody } from "@/lib/api/body";
-import { apiRoute } from "@/lib/api/route";
-import { editComment } from "@/lib/workspace/comments";
+import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
+import { apiRoute } from "@/lib/server/http/route";
+import { editComment } from "@/lib/server/workspace/comments";
 
 type Params = { team: string; scenario: string; number: string; comment: string };
 

@@ -1,5 +1,5 @@
-import { tokenRoute } from "@/lib/api/token-route";
-import { loadConformanceCheck } from "@/lib/conformance/service";
+import { tokenRoute } from "@/lib/server/http/token-route";
+import { loadConformanceCheck } from "@/lib/server/handoff/conformance/service";
 
 type Params = { team: string; scenario: string; number: string; check: string };
 

@@ -1,0 +1,72 @@
+import "server-only";
+
+import { and, eq, lt, sql } from "drizzle-orm";
+
+import type { Executor } from "@/db/client";
+import { rateLimitBuckets } from "@/db/schema/rate-limits";
+
+import { AppError } from "../../shared/errors";
+
+export interface RateLimitRule {
+  /** Attempts allowed per window. */
+  limit: number;
+  windowMs: number;
+}
+
+// Sign-in: a person mistyping gets plenty of tries; a guesser gets few per hour per account.
+// The per-address limits are looser because an office may share one address.
+export const RATE_LIMITS = {
+  signInAccount: { limit: 10, windowMs: 15 * 60 * 1000 },
+  signInAddress: { limit: 50, windowMs: 15 * 60 * 1000 },
+  resetAccount: { limit: 3, windowMs: 60 * 60 * 1000 },
+  resetAddress: { limit: 20, windowMs: 60 * 60 * 1000 },
+} satisfies Record<string, RateLimitRule>;
+
+/**
+ * Count one attempt against `key` and say whether it is within the rule. A single upsert keeps
+ * it atomic under concurrent requests; old windows of the same key are dropped on the way.
+ */
+export async function hitRateLimit(
+  db: Executor,
+  key: string,
+  rule: RateLimitRule,
+  now: Date = new Date(),
+): Promise<{ allowed: boolean; retryAfterSeconds: number }> {
+  const windowStart = new Date(Math.floor(now.getTime() / rule.windowMs) * rule.windowMs);
+  const [row] = await db
+    .insert(rateLimitBuckets)
+    .values({ key, windowStart, count: 1 })
+    .onConflictDoUpdate({
+      target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
+      set: { count: sql`${rateLimitBuckets.count} + 1` },
+    })
+    .returning({ count: rateLimitBuckets.count });
+  await db
+    .delete(rateLimitBuckets)
+    .where(and(eq(rateLimitBuckets.key, key), lt(rateLimitBuckets.windowStart, windowStart)));
+  const retryAfterSeconds = Math.ceil(
+    (windowStart.getTime() + rule.windowMs - now.getTime()) / 1000,
+  );
+  return { allowed: row.count <= rule.limit, retryAfterSeconds };
+}
+
+/** Throw the user-facing error when any of the given keys is over its rule. */
+export async function enforceRateLimits(
+  db: Executor,
+  scope: string,
+  checks: { key: string; rule: RateLimitRule }[],
+  now: Date = new Date(),
+): Promise<void> {
+  let wait = 0;
+  for (const { key, rule } of checks) {
+    const result = await hitRateLimit(db, key, rule, now);
+    if (!result.allowed) wait = Math.max(wait, result.retryAfterSeconds);
+  }
+  if (wait > 0) {
+    const minutes = Math.max(1, Math.ceil(wait / 60));
+    throw new AppError(
+      `rate-limited:${scope}`,
+      `Too many attempts. Please wait ${minutes} minute${minutes === 1 ? "" : "s"} and try again.`,
+    );
+  }
+}

@@ -1,0 +1,111 @@
+import "server-only";
+
+import { and, eq, isNull } from "drizzle-orm";
+
+import type { Db } from "@/db/client";
+import { sessions } from "@/db/schema/sessions";
+import { passwordResetTokens, users } from "@/db/schema/users";
+import { recordAudit } from "@/lib/server/access/audit";
+import { revokeApiTokensOfUser } from "@/db/queries/api-tokens";
+import { hashPassword } from "@/lib/server/accounts/auth/password";
+import { hashToken, looksLikeToken, newToken, tokenState } from "@/lib/server/accounts/auth/tokens";
+import { resetPasswordMessage } from "@/lib/server/email/templates/reset";
+import { linkTo, type MailDeps } from "@/lib/shared/mail-types";
+import { AppError } from "@/lib/shared/errors";
+import { enforceRateLimits, RATE_LIMITS } from "@/lib/server/access/rate-limit";
+import { resetPasswordSchema, resetRequestSchema } from "@/lib/shared/validations/auth";
+import { parseInput } from "@/lib/shared/validations/parse";
+
+const MESSAGES = {
+  unknown: "This reset link is not valid. Ask for a new one.",
+  used: "This reset link was used already. Ask for a new one if you still need it.",
+  expired: "This reset link has expired (links last one hour). Ask for a new one.",
+};
+
+/**
+ * Mails a reset link when the account exists. The answer is the same either way so the form
+ * cannot be used to learn who has an account; the limits still count every request.
+ */
+export async function requestPasswordReset(
+  db: Db,
+  input: unknown,
+  clientAddress: string,
+  deps: MailDeps,
+  now: Date = new Date(),
+): Promise<void> {
+  const { email } = parseInput(resetRequestSchema, input);
+  await enforceRateLimits(
+    db,
+    "reset",
+    [
+      { key: `reset:account:${email}`, rule: RATE_LIMITS.resetAccount },
+      { key: `reset:address:${clientAddress}`, rule: RATE_LIMITS.resetAddress },
+    ],
+    now,
+  );
+  const [user] = await db.select().from(users).where(eq(users.email, email));
+  if (!user) return;
+  const token = newToken("reset", now);
+  await db
+    .insert(passwordResetTokens)
+    .values({ tokenHash: token.hash, userId: user.id, expiresAt: token.expiresAt });
+  await recordAudit(db, { actorId: user.id, action: "account.reset-request" });
+  await deps.mailer.send(
+    resetPasswordMessage({
+      to: user.email,
+      name: user.name,
+      url: linkTo(deps.appUrl, `/reset/${token.token}`),
+    }),
+  );
+}
+
+/** Checks a reset token without using it (the page shows the error before the form). */
+export async function checkResetToken(db: Db, token: unknown, now: Date = new Date()) {
+  if (!looksLikeToken(token)) throw new AppError("not-found:token", MESSAGES.unknown, "token");
+  const [row] = await db
+    .select()
+    .from(passwordResetTokens)
+    .where(eq(passwordResetTokens.tokenHash, hashToken(token)));
+  const state = tokenState(row, now);
+  if (state === "unknown") throw new AppError("not-found:token", MESSAGES.unknown, "token");
+  if (state === "used") throw new AppError("used:token", MESSAGES.used, "token");
+  if (state === "expired") throw new AppError("expired:token", MESSAGES.expired, "token");
+  return row;
+}
+
+/** Sets the new password, uses up every open reset link and ends every session of the user. */
+export async function resetPassword(
+  db: Db,
+  input: unknown,
+  now: Date = new Date(),
+): Promise<{ userId: string }> {
+  const data = parseInput(resetPasswordSchema, input);
+  const row = await checkResetToken(db, data.token, now);
+  const { hash, salt } = await hashPassword(data.password);
+  return db.transaction(async (tx) => {
+    const consumed = await tx
+      .update(passwordResetTokens)
+      .set({ usedAt: now })
+      .where(
+        and(eq(passwordResetTokens.tokenHash, row.tokenHash), isNull(passwordResetTokens.usedAt)),
+      )
+      .returning({ userId: passwordResetTokens.userId });
+    if (consumed.length === 0) throw new AppError("used:token", MESSAGES.used, "token");
+    await tx
+      .update(passwordResetTokens)
+      .set({ usedAt: now })
+      .where(and(eq(passwordResetTokens.userId, row.userId), isNull(passwordResetTokens.usedAt)));
+    // The link reached the mailbox, so the address is proven as well.
+    const [user] = await tx
+      .update(users)
+      .set({ passwordHash: hash, passwordSalt: salt })
+      .where(eq(users.id, row.userId))
+      .returning({ verifiedAt: users.verifiedAt });
+    if (!user.verifiedAt)
+      await tx.update(users).set({ verifiedAt: now }).where(eq(users.id, row.userId));
+    await tx.delete(sessions).where(eq(sessions.userId, row.userId));
+    await revokeApiTokensOfUser(tx, row.userId, now);
+    await recordAudit(tx, { actorId: row.userId, action: "account.reset-password" });
+    return { userId: row.userId };
+  });
+}

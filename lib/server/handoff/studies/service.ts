@@ -1,0 +1,133 @@
+import "server-only";
+
+/** Parameter studies of a team: submit (fit:run), progress (team:read), results (export). */
+import JSZip from "jszip";
+import type PgBoss from "pg-boss";
+
+import type { Executor } from "@/db/client";
+import {
+  findStudyInTeam,
+  insertStudy,
+  listStudyItems,
+  listStudyResults,
+} from "@/db/queries/studies";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { recordAudit } from "@/lib/server/access/audit";
+import { CAUTION_LINES } from "@/lib/shared/caution";
+import { safeName } from "@/lib/server/handoff/bundle/build";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+import { notFound, requireUuid } from "@/lib/server/workspace/errors";
+import { parseWithPath } from "@/lib/server/workspace/parse";
+
+import { designStudy } from "./design";
+import { enqueueStudyItems } from "./queue";
+import { studyRequestSchema } from "./schema";
+
+export async function submitStudy(
+  db: Executor,
+  boss: () => Promise<PgBoss>,
+  actor: Actor,
+  teamSlug: string,
+  input: unknown,
+) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "fit:run");
+  const request = parseWithPath(studyRequestSchema, input);
+  const { legs, sets, design } = designStudy(request);
+  const { study, itemIds } = await insertStudy(
+    db,
+    {
+      teamId: ctx.team.id,
+      name: request.name || "Parameter study",
+      legs,
+      design,
+      total: sets.length,
+      createdBy: ctx.actor.id,
+    },
+    sets.map((set, position) => ({ position, set })),
+  );
+  await enqueueStudyItems(await boss(), itemIds);
+  await recordAudit(db, {
+    actorId: ctx.actor.id,
+    teamId: ctx.team.id,
+    action: "study.submit",
+    target: study.id,
+    detail: { sets: sets.length },
+  });
+  return { id: study.id, total: sets.length };
+}
+
+async function studyOf(db: Executor, teamId: string, studyId: unknown) {
+  const study = await findStudyInTeam(db, teamId, requireUuid(studyId, "study"));
+  if (!study) throw notFound("study");
+  return study;
+}
+
+export async function getStudy(db: Executor, actor: Actor, teamSlug: string, studyId: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
+  const study = await studyOf(db, ctx.team.id, studyId);
+  const items = await listStudyItems(db, study.id);
+  const done = items.filter((i) => i.state === "done").length;
+  const failed = items.filter((i) => i.state === "failed").length;
+  const state =
+    done + failed < study.total
+      ? done + failed > 0
+        ? "running"
+        : "queued"
+      : failed > 0
+        ? "finished with failures"
+        : "done";
+  return {
+    id: study.id,
+    name: study.name,
+    createdAt: study.createdAt,
+    design: study.design,
+    total: study.total,
+    done,
+    failed,
+    state,
+    items,
+  };
+}
+
+/** A zip: one contract CSV per finished set, summary.csv with every set's state, README.txt. */
+export async function studyResultsZip(
+  db: Executor,
+  actor: Actor,
+  teamSlug: string,
+  studyId: unknown,
+) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "export");
+  const study = await studyOf(db, ctx.team.id, studyId);
+  const rows = await listStudyResults(db, study.id);
+  const zip = new JSZip();
+  const summary = ["position,set,label,state,failed,failMode,stoppedAtStep,error"];
+  for (const row of rows) {
+    const name = `${String(row.position + 1).padStart(4, "0")}-${safeName(row.set.id)}.csv`;
+    if (row.csv !== null) zip.file(`sets/${name}`, row.csv);
+    const cells = [
+      row.position + 1,
+      row.set.id,
+      row.set.label,
+      row.state,
+      row.status?.failed ?? "",
+      row.status?.failMode ?? "",
+      row.status?.stoppedAtStep ?? "",
+      row.error ?? "",
+    ];
+    summary.push(cells.map((c) => JSON.stringify(String(c))).join(","));
+  }
+  zip.file("summary.csv", summary.join("\n") + "\n");
+  zip.file(
+    "README.txt",
+    [
+      `Parameter study: ${study.name}`,
+      `Sets: ${study.total}`,
+      "Each sets/*.csv has the command-line driver's columns (see the API page).",
+      "",
+      ...CAUTION_LINES,
+      "",
+    ].join("\n"),
+  );
+  const bytes = await zip.generateAsync({ type: "uint8array", compression: "DEFLATE" });
+  return { bytes, fileName: `${safeName(study.name)}-results.zip` };
+}

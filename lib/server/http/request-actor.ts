@@ -1,0 +1,38 @@
+import "server-only";
+
+import { getDb } from "@/db/index";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { actorFromUser, createLucia, type AppLucia } from "@/lib/server/accounts/auth/lucia";
+import { isHttpsApp } from "@/lib/server/access/env";
+
+let lucia: AppLucia | undefined;
+
+function apiLucia(): AppLucia {
+  lucia ??= createLucia(getDb(), { secureCookies: isHttpsApp() });
+  return lucia;
+}
+
+/**
+ * The session of a route handler's request, read from its Cookie header (not next/headers, so
+ * handlers can be called with a plain Request in tests). A refreshed or dead session comes
+ * back with the Set-Cookie value the response should carry.
+ */
+export async function actorFromRequest(
+  request: Request,
+): Promise<{ actor: Actor; setCookie?: string }> {
+  const auth = apiLucia();
+  const sessionId = auth.readSessionCookie(request.headers.get("cookie") ?? "");
+  if (!sessionId) return { actor: null };
+  const { session, user } = await auth.validateSession(sessionId);
+  if (!session) return { actor: null, setCookie: auth.createBlankSessionCookie().serialize() };
+  return {
+    actor: actorFromUser(user),
+    setCookie: session.fresh ? auth.createSessionCookie(session.id).serialize() : undefined,
+  };
+}
+
+/** Per-address key for rate limits; see lib/server/accounts/auth/client-address.ts for the header's limits. */
+export function clientAddressOf(request: Request): string {
+  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
+  return (forwarded || request.headers.get("x-real-ip")?.trim() || "direct").slice(0, 64);
+}

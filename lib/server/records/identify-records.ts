@@ -1,0 +1,51 @@
+import "server-only";
+
+import type { Db } from "@/db/client";
+import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
+import { identify, type IdentifyResult } from "@/lib/calibration/identify";
+import type { Actor } from "@/lib/server/accounts/actor";
+import type { MaterialParams } from "@/lib/mechanics/types";
+import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+import { parseWithPath } from "@/lib/server/workspace/parse";
+
+import { identifyRequestSchema } from "./fit-schema";
+import { loadRecordsForFit, type LoadedRecord } from "./load-records";
+
+export type IdentifyResponse = IdentifyResult & {
+  recordNames: Record<string, string>;
+  base: "given" | "demo";
+};
+
+type IdentifyData = ReturnType<typeof identifyRequestSchema.parse>;
+
+/** spec E on loaded records; the base fills what the records do not inform. */
+export function runIdentify(records: LoadedRecord[], data: IdentifyData): IdentifyResponse {
+  const base: MaterialParams = data.base
+    ? toMaterialParams(data.base as ParameterSet)
+    : { ...DEMO_PARAMS };
+  const result = identify(
+    records.map((r) => r.input),
+    { base, law: data.law, modulus: data.modulus },
+  );
+  const notes = data.base
+    ? result.notes
+    : [
+        ...result.notes,
+        "Values no record informs keep the invented demo set's values; give starting values to replace them.",
+      ];
+  return {
+    ...result,
+    notes,
+    recordNames: Object.fromEntries(records.map((r) => [r.id, r.name])),
+    base: data.base ? "given" : "demo",
+  };
+}
+
+/** Identification without saving (fit:run): the page shows it, then the user decides. */
+export async function identifyRecords(db: Db, actor: Actor, teamSlug: string, input: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "fit:run");
+  const data = parseWithPath(identifyRequestSchema, input);
+  const records = await loadRecordsForFit(db, ctx.team.id, data.recordIds);
+  return runIdentify(records, data);
+}

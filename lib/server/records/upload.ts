@@ -1,0 +1,72 @@
+import "server-only";
+
+import { createHash } from "node:crypto";
+
+import type { Db } from "@/db/client";
+import { insertTestRecord } from "@/db/queries/test-records";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { recordAudit } from "@/lib/server/access/audit";
+import type { CsvError } from "@/lib/csv/csv-error";
+import { readCurveCsv } from "@/lib/csv/read-curve-csv";
+import { AppError } from "@/lib/shared/errors";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+import { DetailedAppError } from "@/lib/server/workspace/errors";
+import { parseWithPath } from "@/lib/server/workspace/parse";
+
+import { toStoredPoints } from "../../shared/records/stored-points";
+import { nameFromFile, uploadTestRecordSchema } from "./upload-schema";
+
+/** A file error as the API answers it: the message names the line and the cell. */
+function csvFailure(error: CsvError): AppError {
+  const code = error.code === "too-large" ? "invalid:too-large" : "invalid:csv";
+  return new DetailedAppError(
+    code,
+    error.message,
+    { line: error.line, column: error.column, reason: error.code },
+    "text",
+  );
+}
+
+/**
+ * Re-parses the file on the server with the same lib/csv code the browser used, and stores the
+ * original text with the parsed points in one transaction. Any error saves nothing.
+ */
+export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, input: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "test-record:edit");
+  const data = parseWithPath(uploadTestRecordSchema, input);
+  const read = readCurveCsv(data.text, data.mapping);
+  if (!read.ok) throw csvFailure(read.error);
+  const { points, table, warnings } = read;
+  const bytes = Buffer.from(data.text, "utf8");
+  const name = data.name || nameFromFile(data.fileName);
+  const { strainUnit: _s, stressUnit: _t, ...columns } = data.mapping;
+  return db.transaction(async (tx) => {
+    const id = await insertTestRecord(tx, {
+      teamId: ctx.team.id,
+      name,
+      ...data.meta,
+      strainRate: data.meta.strainRate ?? null,
+      temperature: data.meta.temperature ?? null,
+      laboratory: data.meta.laboratory || null,
+      notes: data.meta.notes || null,
+      mapping: { ...columns, strainUnit: points.strainUnit, stressUnit: points.stressUnit },
+      headers: table.headers,
+      warnings,
+      points: toStoredPoints(points),
+      pointCount: points.strain.length,
+      fileName: data.fileName,
+      fileSize: bytes.byteLength,
+      fileSha256: createHash("sha256").update(bytes).digest("hex"),
+      fileText: data.text,
+      createdBy: ctx.actor.id,
+    });
+    await recordAudit(tx, {
+      actorId: ctx.actor.id,
+      teamId: ctx.team.id,
+      action: "test-record.create",
+      target: id,
+      detail: { name, fileName: data.fileName, points: points.strain.length },
+    });
+    return { id, name, pointCount: points.strain.length, warnings };
+  });
+}

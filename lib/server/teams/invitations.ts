@@ -1,0 +1,90 @@
+import "server-only";
+
+import { and, eq, gt, isNull } from "drizzle-orm";
+
+import type { Db } from "@/db/client";
+import { invitations, type Invitation } from "@/db/schema/invitations";
+import { memberships } from "@/db/schema/teams";
+import { users } from "@/db/schema/users";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { recordAudit } from "@/lib/server/access/audit";
+import { canGrant, ROLE_LABELS } from "@/lib/shared/permissions";
+import { newToken } from "@/lib/server/accounts/auth/tokens";
+import { invitationMessage } from "@/lib/server/email/templates/invitation";
+import { linkTo, type MailDeps } from "@/lib/shared/mail-types";
+import { AppError } from "@/lib/shared/errors";
+import { inviteSchema } from "@/lib/shared/validations/teams";
+import { parseInput } from "@/lib/shared/validations/parse";
+
+import { authorizeTeam } from "../access/team-access";
+
+/** Invites an address with a role; a new invitation to the same address replaces the open one. */
+export async function inviteMember(
+  db: Db,
+  actor: Actor,
+  input: unknown,
+  deps: MailDeps,
+  now: Date = new Date(),
+): Promise<Invitation & { mailQueued: boolean }> {
+  const data = parseInput(inviteSchema, input);
+  const ctx = await authorizeTeam(db, actor, data.teamSlug, "member:invite");
+  if (!canGrant(ctx.role, data.role)) {
+    throw new AppError(
+      "forbidden:role",
+      `As ${ROLE_LABELS[ctx.role].toLowerCase()} you may not invite someone as ${ROLE_LABELS[data.role].toLowerCase()}.`,
+      "role",
+    );
+  }
+  const [already] = await db
+    .select({ userId: memberships.userId })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.teamId, ctx.team.id), eq(users.email, data.email)));
+  if (already) throw new AppError("conflict:member", "This person is a member already.", "email");
+
+  const token = newToken("invitation", now);
+  const invitation = await db.transaction(async (tx) => {
+    await tx
+      .update(invitations)
+      .set({ revokedAt: now })
+      .where(
+        and(
+          eq(invitations.teamId, ctx.team.id),
+          eq(invitations.email, data.email),
+          isNull(invitations.acceptedAt),
+          isNull(invitations.revokedAt),
+          gt(invitations.expiresAt, now),
+        ),
+      );
+    const [row] = await tx
+      .insert(invitations)
+      .values({
+        teamId: ctx.team.id,
+        email: data.email,
+        role: data.role,
+        tokenHash: token.hash,
+        invitedBy: ctx.actor.id,
+        expiresAt: token.expiresAt,
+      })
+      .returning();
+    await recordAudit(tx, {
+      actorId: ctx.actor.id,
+      teamId: ctx.team.id,
+      action: "invitation.create",
+      target: data.email,
+      detail: { role: data.role },
+    });
+    return row;
+  });
+  const sent = await deps.mailer.send(
+    invitationMessage({
+      to: data.email,
+      inviterName: ctx.actor.name,
+      teamName: ctx.team.name,
+      roleLabel: ROLE_LABELS[data.role],
+      url: linkTo(deps.appUrl, `/invite/${token.token}`),
+    }),
+  );
+  // The invitation stands either way; a queued mail goes out when the mail server is back.
+  return { ...invitation, mailQueued: sent?.queued === true };
+}

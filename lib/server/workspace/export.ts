@@ -1,0 +1,103 @@
+import "server-only";
+
+import type { Db } from "@/db/client";
+import { loadPeople, loadTeamContent } from "@/db/queries/team-export";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { recordAudit } from "@/lib/server/access/audit";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+
+import { TEAM_EXPORT_FORMAT, type ExportPerson, type TeamExport } from "./export-schema";
+
+export type TeamExportResponse = TeamExport;
+
+function groupBy<T, K>(rows: T[], key: (row: T) => K): Map<K, T[]> {
+  const map = new Map<K, T[]>();
+  for (const row of rows) {
+    const list = map.get(key(row));
+    if (list) list.push(row);
+    else map.set(key(row), [row]);
+  }
+  return map;
+}
+
+const iso = (d: Date) => d.toISOString();
+const isoOrNull = (d: Date | null) => (d ? d.toISOString() : null);
+
+/** One JSON document with everything the team made (share links and the audit trail stay). */
+export async function exportTeam(
+  db: Db,
+  actor: Actor,
+  teamSlug: string,
+  now: Date = new Date(),
+): Promise<TeamExportResponse> {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "export");
+  const c = await loadTeamContent(db, ctx.team.id);
+  const people = await loadPeople(
+    db,
+    [
+      ...c.scenarioRows.map((r) => r.createdBy),
+      ...c.revisionRows.flatMap((r) => [r.authorId, r.reviewBy]),
+      ...c.eventRows.map((r) => r.actorId),
+      ...c.commentRows.map((r) => r.authorId),
+      ...c.setRows.flatMap((r) => [r.createdBy, r.updatedBy]),
+    ].filter((id): id is string => id !== null),
+  );
+  const who = (id: string | null): ExportPerson => (id ? (people.get(id) ?? null) : null);
+  const revisionsOf = groupBy(c.revisionRows, (r) => r.scenarioId);
+  const eventsOf = groupBy(c.eventRows, (r) => r.revisionId);
+  const commentsOf = groupBy(c.commentRows, (r) => r.revisionId);
+
+  const doc: TeamExport = {
+    format: TEAM_EXPORT_FORMAT,
+    exportedAt: iso(now),
+    team: { name: ctx.team.name, slug: ctx.team.slug },
+    parameterSets: c.setRows.map((s) => ({
+      name: s.name,
+      values: s.values as Record<string, unknown>,
+      provenance: s.provenance,
+      createdBy: who(s.createdBy),
+      updatedBy: who(s.updatedBy),
+      createdAt: iso(s.createdAt),
+      updatedAt: iso(s.updatedAt),
+    })),
+    scenarios: c.scenarioRows.map((s) => ({
+      name: s.name,
+      materialLabel: s.materialLabel,
+      tags: s.tags,
+      createdBy: who(s.createdBy),
+      createdAt: iso(s.createdAt),
+      updatedAt: iso(s.updatedAt),
+      revisions: (revisionsOf.get(s.id) ?? []).map((r) => ({
+        number: r.number,
+        author: who(r.authorId),
+        message: r.message,
+        file: r.file,
+        createdAt: iso(r.createdAt),
+        review: { state: r.reviewState, by: who(r.reviewBy), at: isoOrNull(r.reviewAt) },
+        reviewEvents: (eventsOf.get(r.id) ?? []).map((e) => ({
+          from: e.fromState,
+          to: e.toState,
+          actor: who(e.actorId),
+          note: e.note,
+          at: iso(e.at),
+        })),
+        comments: (commentsOf.get(r.id) ?? []).map((m) => ({
+          key: m.id,
+          parentKey: m.parentId,
+          author: who(m.authorId),
+          body: m.body,
+          increment: m.increment,
+          createdAt: iso(m.createdAt),
+          editedAt: isoOrNull(m.editedAt),
+        })),
+      })),
+    })),
+  };
+  await recordAudit(db, {
+    actorId: ctx.actor.id,
+    teamId: ctx.team.id,
+    action: "team.export",
+    detail: { scenarios: doc.scenarios.length, parameterSets: doc.parameterSets.length },
+  });
+  return doc;
+}

@@ -1,0 +1,177 @@
+import "server-only";
+
+import { randomUUID } from "node:crypto";
+
+import { count, eq } from "drizzle-orm";
+
+import type { Db, Executor } from "@/db/client";
+import { findUsersByEmail } from "@/db/queries/team-export";
+import { revisionComments } from "@/db/schema/comments";
+import { parameterSets, type ParameterSetProvenance } from "@/db/schema/parameter-sets";
+import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { recordAudit } from "@/lib/server/access/audit";
+import { AppError } from "@/lib/shared/errors";
+import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+
+import { type ExportPerson, type TeamExport, teamExportSchema } from "./export-schema";
+import { checkTeamExport } from "./import-check";
+import { parseWithPath } from "./parse";
+
+export interface TeamImportResponse {
+  scenarios: number;
+  revisions: number;
+  comments: number;
+  parameterSets: number;
+  /** People named in the file who have no account here: their authorship is left empty. */
+  unmatchedPeople: string[];
+}
+
+const CHUNK = 500;
+
+async function insertChunked<T>(rows: T[], insert: (chunk: T[]) => Promise<unknown>) {
+  for (let i = 0; i < rows.length; i += CHUNK) await insert(rows.slice(i, i + CHUNK));
+}
+
+function peopleIn(doc: TeamExport): string[] {
+  const all: ExportPerson[] = [];
+  for (const s of doc.parameterSets) all.push(s.createdBy, s.updatedBy);
+  for (const s of doc.scenarios) {
+    all.push(s.createdBy);
+    for (const r of s.revisions) {
+      all.push(r.author, r.review.by, ...r.reviewEvents.map((e) => e.actor));
+      all.push(...r.comments.map((c) => c.author));
+    }
+  }
+  return all.filter((p): p is NonNullable<ExportPerson> => p !== null).map((p) => p.email);
+}
+
+async function assertEmpty(db: Executor, teamId: string) {
+  const [[s], [p]] = await Promise.all([
+    db.select({ n: count() }).from(scenarios).where(eq(scenarios.teamId, teamId)),
+    db.select({ n: count() }).from(parameterSets).where(eq(parameterSets.teamId, teamId)),
+  ]);
+  if (s.n > 0 || p.n > 0) {
+    throw new AppError(
+      "conflict:not-empty",
+      "Import into a new, empty team: this one has scenarios or parameter sets already.",
+    );
+  }
+}
+
+/** Loads a team export into an empty team the actor owns; all of it or nothing. */
+export async function importTeam(
+  db: Db,
+  actor: Actor,
+  teamSlug: string,
+  input: unknown,
+): Promise<TeamImportResponse> {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "team:import");
+  const doc = parseWithPath(teamExportSchema, input);
+  checkTeamExport(doc);
+  const emails = peopleIn(doc);
+  const known = await findUsersByEmail(db, emails);
+  const idOf = (p: ExportPerson) => (p ? (known.get(p.email.toLowerCase()) ?? null) : null);
+  const at = (iso: string) => new Date(iso);
+  const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
+
+  const sets = doc.parameterSets.map((s) => ({
+    teamId: ctx.team.id,
+    name: s.name,
+    // Valid (checked above); parsing again gives the stored shape with defaults filled.
+    values: parameterSetSchema.parse(s.values),
+    provenance: s.provenance as ParameterSetProvenance,
+    createdBy: idOf(s.createdBy),
+    updatedBy: idOf(s.updatedBy),
+    createdAt: at(s.createdAt),
+    updatedAt: at(s.updatedAt),
+  }));
+  const scenarioRows: (typeof scenarios.$inferInsert)[] = [];
+  const revisionRows: (typeof scenarioRevisions.$inferInsert)[] = [];
+  const eventRows: (typeof reviewEvents.$inferInsert)[] = [];
+  const commentRows: (typeof revisionComments.$inferInsert)[] = [];
+  for (const s of doc.scenarios) {
+    const scenarioId = randomUUID();
+    const latest = Math.max(...s.revisions.map((r) => r.number));
+    const newest = s.revisions.find((r) => r.number === latest)!;
+    scenarioRows.push({
+      id: scenarioId,
+      teamId: ctx.team.id,
+      name: s.name,
+      materialLabel: s.materialLabel,
+      tags: s.tags,
+      createdBy: idOf(s.createdBy),
+      latestRevision: latest,
+      latestReviewState: newest.review.state,
+      createdAt: at(s.createdAt),
+      updatedAt: at(s.updatedAt),
+    });
+    for (const r of s.revisions) {
+      const revisionId = randomUUID();
+      revisionRows.push({
+        id: revisionId,
+        scenarioId,
+        number: r.number,
+        authorId: idOf(r.author),
+        message: r.message,
+        file: r.file,
+        createdAt: at(r.createdAt),
+        reviewState: r.review.state,
+        reviewBy: idOf(r.review.by),
+        reviewAt: at0(r.review.at),
+      });
+      for (const e of r.reviewEvents) {
+        eventRows.push({
+          revisionId,
+          fromState: e.from,
+          toState: e.to,
+          actorId: idOf(e.actor),
+          note: e.note,
+          at: at(e.at),
+        });
+      }
+      // New ids for comments, keeping each reply tied to its (renamed) parent.
+      const newId = new Map(r.comments.map((c) => [c.key, randomUUID()]));
+      for (const c of r.comments) {
+        commentRows.push({
+          id: newId.get(c.key)!,
+          revisionId,
+          parentId: c.parentKey ? newId.get(c.parentKey)! : null,
+          authorId: idOf(c.author),
+          body: c.body,
+          increment: c.increment,
+          createdAt: at(c.createdAt),
+          editedAt: at0(c.editedAt),
+        });
+      }
+    }
+  }
+
+  await db.transaction(async (tx) => {
+    await assertEmpty(tx, ctx.team.id);
+    await insertChunked(sets, (chunk) => tx.insert(parameterSets).values(chunk));
+    await insertChunked(scenarioRows, (chunk) => tx.insert(scenarios).values(chunk));
+    await insertChunked(revisionRows, (chunk) => tx.insert(scenarioRevisions).values(chunk));
+    await insertChunked(eventRows, (chunk) => tx.insert(reviewEvents).values(chunk));
+    // Parents before replies: rows are in creation order, and a reply is never older.
+    await insertChunked(commentRows, (chunk) => tx.insert(revisionComments).values(chunk));
+    await recordAudit(tx, {
+      actorId: ctx.actor.id,
+      teamId: ctx.team.id,
+      action: "team.import",
+      detail: {
+        from: doc.team.slug,
+        scenarios: scenarioRows.length,
+        revisions: revisionRows.length,
+      },
+    });
+  });
+  return {
+    scenarios: scenarioRows.length,
+    revisions: revisionRows.length,
+    comments: commentRows.length,
+    parameterSets: sets.length,
+    unmatchedPeople: [...new Set(emails.filter((e) => !known.has(e.toLowerCase())))],
+  };
+}

@@ -1,0 +1,121 @@
+import { and, eq } from "drizzle-orm";
+
+import type { Db } from "@/db/client";
+import {
+  findParameterSetView,
+  listParameterSetsForTeam,
+  type ParameterSetView,
+} from "@/db/queries/parameter-sets";
+import { parameterSets } from "@/db/schema/parameter-sets";
+import type { Actor } from "@/lib/server/accounts/actor";
+import { isUniqueViolation } from "@/lib/server/accounts/pg-errors";
+import { recordAudit } from "@/lib/server/access/audit";
+import { AppError } from "@/lib/shared/errors";
+import { authorizeTeam } from "@/lib/server/access/team-access";
+import {
+  createParameterSetSchema,
+  updateParameterSetSchema,
+} from "@/lib/shared/validations/parameter-sets";
+
+import { notFound, requireUuid } from "./errors";
+import { parseWithPath } from "./parse";
+
+export type ParameterSetListResponse = { items: ParameterSetView[] };
+export type ParameterSetResponse = ParameterSetView;
+
+const DUPLICATE = "This team has a parameter set with that name already.";
+
+async function findOrThrow(db: Db, teamId: string, id: unknown) {
+  const view = await findParameterSetView(db, teamId, requireUuid(id, "parameter-set"));
+  if (!view) throw notFound("parameter-set");
+  return view;
+}
+
+/** Unique names are enforced by the index; a clash becomes a 409 beside the name field. */
+async function uniqueName<T>(work: () => Promise<T>): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    if (isUniqueViolation(error)) throw new AppError("conflict:name", DUPLICATE, "name");
+    throw error;
+  }
+}
+
+export async function listParameterSets(db: Db, actor: Actor, teamSlug: string) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
+  return { items: await listParameterSetsForTeam(db, ctx.team.id) };
+}
+
+export async function getParameterSet(db: Db, actor: Actor, teamSlug: string, id: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
+  return findOrThrow(db, ctx.team.id, id);
+}
+
+export async function createParameterSet(db: Db, actor: Actor, teamSlug: string, input: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "parameter-set:edit");
+  const data = parseWithPath(createParameterSetSchema, input);
+  const id = await uniqueName(() =>
+    db.transaction(async (tx) => {
+      const [row] = await tx
+        .insert(parameterSets)
+        .values({ teamId: ctx.team.id, ...data, createdBy: ctx.actor.id, updatedBy: ctx.actor.id })
+        .returning({ id: parameterSets.id });
+      await recordAudit(tx, {
+        actorId: ctx.actor.id,
+        teamId: ctx.team.id,
+        action: "parameter-set.create",
+        target: row.id,
+        detail: { name: data.name },
+      });
+      return row.id;
+    }),
+  );
+  return findOrThrow(db, ctx.team.id, id);
+}
+
+export async function updateParameterSet(
+  db: Db,
+  actor: Actor,
+  teamSlug: string,
+  id: unknown,
+  input: unknown,
+) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "parameter-set:edit");
+  const before = await findOrThrow(db, ctx.team.id, id);
+  const data = parseWithPath(updateParameterSetSchema, input);
+  await uniqueName(() =>
+    db.transaction(async (tx) => {
+      await tx
+        .update(parameterSets)
+        .set({ ...data, updatedBy: ctx.actor.id, updatedAt: new Date() })
+        .where(and(eq(parameterSets.teamId, ctx.team.id), eq(parameterSets.id, before.id)));
+      await recordAudit(tx, {
+        actorId: ctx.actor.id,
+        teamId: ctx.team.id,
+        action: "parameter-set.update",
+        target: before.id,
+        // The previous values go into the trail: an edit never loses what was there.
+        detail: {
+          before: { name: before.name, values: before.values, provenance: before.provenance },
+        },
+      });
+    }),
+  );
+  return findOrThrow(db, ctx.team.id, before.id);
+}
+
+export async function deleteParameterSet(db: Db, actor: Actor, teamSlug: string, id: unknown) {
+  const ctx = await authorizeTeam(db, actor, teamSlug, "parameter-set:edit");
+  const before = await findOrThrow(db, ctx.team.id, id);
+  await db.transaction(async (tx) => {
+    await recordAudit(tx, {
+      actorId: ctx.actor.id,
+      teamId: ctx.team.id,
+      action: "parameter-set.delete",
+      target: before.id,
+      detail: { name: before.name, values: before.values, provenance: before.provenance },
+    });
+    await tx.delete(parameterSets).where(eq(parameterSets.id, before.id));
+  });
+  return { deleted: before.id };
+}

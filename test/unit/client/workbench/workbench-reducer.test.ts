@@ -1,0 +1,51 @@
+import { describe, expect, it } from "vitest";
+import { PRESETS } from "@/lib/client/workbench/presets";
+import { setListReducer } from "@/lib/client/workbench/set-list";
+import { initModel, workbenchReducer } from "@/lib/client/workbench/workbench-reducer";
+
+const entries = setListReducer([], { type: "add", params: PRESETS[0].params });
+const model = initModel({ name: "x", entries, pathText: "e11=1% in 10" });
+
+describe("workbench state", () => {
+  it("keeps the last valid path while the text has an error, and reports where", () => {
+    const bad = workbenchReducer(model, { type: "pathText", text: "e11=1% in 10\nq in 3" });
+    expect(bad.pathErrors[0]).toMatchObject({ line: 2, column: 1 });
+    expect(bad.doc).toBe(model.doc);
+    const good = workbenchReducer(bad, { type: "pathText", text: "e11=2% in 10" });
+    expect(good.pathErrors).toEqual([]);
+    expect(good.doc.items[0]).toMatchObject({ kind: "leg", leg: { target: [0.02, 0, 0] } });
+  });
+
+  it("writes the text again when the table edits the path object", () => {
+    const doc = {
+      items: [
+        {
+          kind: "leg" as const,
+          leg: {
+            control: ["stress", "strain", "stress"] as const,
+            target: [5, 0.001, 0],
+            increments: 4,
+          },
+        },
+      ],
+    };
+    const m = workbenchReducer(model, { type: "pathDoc", doc: JSON.parse(JSON.stringify(doc)) });
+    expect(m.pathText).toBe("s11=5 e22=0.001 in 4");
+  });
+
+  it("selects a new set and falls back when the active one is removed", () => {
+    const two = workbenchReducer(model, { type: "sets", action: { type: "duplicate", id: "A" } });
+    expect(two.activeId).toBe("B");
+    const back = workbenchReducer(two, { type: "sets", action: { type: "remove", id: "B" } });
+    expect(back.activeId).toBe("A");
+  });
+
+  it("bumps the epoch when the whole state is replaced", () => {
+    const m = workbenchReducer(model, {
+      type: "replace",
+      state: { name: "y", entries, pathText: "g12=1% in 5" },
+    });
+    expect(m.epoch).toBe(1);
+    expect(m.name).toBe("y");
+  });
+});
