@@ -8,6 +8,9 @@ set -uo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
 REPO=$(pwd)
+# A plain start, as a new user runs it: nothing from the calling test run (which serves the demo
+# mail page to its own servers) may leak into it.
+unset CRAQUELURE_DEMO_MAIL
 BASE_PORT=${FRESH_BASE_PORT:-$((20000 + $$ % 500 * 2))}
 START_SECONDS=${FRESH_START_SECONDS:-900}
 
