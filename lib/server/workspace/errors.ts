@@ -1,4 +1,5 @@
 import { AppError, type ErrorCode } from "@/lib/shared/errors";
+import { isUuid } from "@/lib/shared/uuid";
 
 /**
  * An expected error that carries data the client needs to act on it (who saved the newer
@@ -22,11 +23,9 @@ export function notFound(what: string): AppError {
   );
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-
 /** Ids arrive in URLs: anything that is not a UUID is simply not found (never a driver error). */
 export function requireUuid(value: unknown, what: string): string {
-  if (typeof value !== "string" || !UUID.test(value)) throw notFound(what);
+  if (!isUuid(value)) throw notFound(what);
   return value.toLowerCase();
 }
 

@@ -7,8 +7,8 @@ import { findRevisionRow, listRevisionsOfScenario } from "@/db/queries/revisions
 import { findScenarioSummary } from "@/db/queries/scenarios";
 import { parseScenarioFile, type Scenario } from "@/lib/scenario/scenario-schema";
 import type { OpenedScenario } from "@/lib/client/workbench/scenario-state";
+import { isUuid } from "@/lib/shared/uuid";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const NUMBER = /^[1-9][0-9]{0,8}$/;
 
 function one(value: string | string[] | undefined): string | undefined {
@@ -41,7 +41,7 @@ export async function loadScenarioPage(
   rev: number | undefined,
   overlay: number | undefined,
 ) {
-  if (!UUID.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const summary = await findScenarioSummary(db, teamId, id.toLowerCase());
   if (!summary) notFound();
   const number = rev ?? summary.latestRevision.number;

@@ -8,10 +8,9 @@ import { requireTeamRole } from "@/lib/server/access/guard";
 import { thinForDisplay } from "@/lib/shared/records/stored-points";
 
 import { TeamNav } from "../../team-nav";
+import { isUuid } from "@/lib/shared/uuid";
 
 export const metadata: Metadata = { title: "Test record" };
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function TestRecordPage({
   params,
@@ -20,7 +19,7 @@ export default async function TestRecordPage({
 }) {
   const { team: slug, id } = await params;
   const ctx = await requireTeamRole(slug, "team:read");
-  if (!UUID.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   const db = getDb();
   const record = await findTestRecordSummary(db, ctx.team.id, id);
   const points = record && (await findTestRecordPoints(db, ctx.team.id, id));

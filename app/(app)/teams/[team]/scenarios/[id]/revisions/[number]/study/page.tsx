@@ -11,12 +11,11 @@ import { can } from "@/lib/shared/permissions";
 import { orNotFound } from "@/lib/server/access/or-not-found";
 import { NUMERIC_PARAMETERS } from "@/lib/server/handoff/studies/schema";
 import { revisionInTeam } from "@/lib/server/access/scope";
+import { isUuid } from "@/lib/shared/uuid";
 
 export const metadata: Metadata = { title: "Parameter study" };
 
 type Params = { team: string; id: string; number: string };
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function StudyPage({
   params,
@@ -48,7 +47,7 @@ export default async function StudyPage({
         Runs this revision&apos;s path for many parameter sets on the team&apos;s queue. Every
         set&apos;s answer is the command-line driver&apos;s CSV.
       </p>
-      {study && UUID.test(study) ? <StudyProgress team={team} studyId={study} /> : null}
+      {study && isUuid(study) ? <StudyProgress team={team} studyId={study} /> : null}
       {can(ctx.role, "fit:run") ? (
         <StudyForm
           team={team}
