@@ -10,7 +10,7 @@ import type { Capability } from "../../shared/permissions";
 import { getActor } from "../accounts/auth/session";
 
 /**
- * The guard for team pages and route handlers: the signed-in actor must hold `capability` in
+ * The guard for team pages (route handlers go through lib/server/http/route.ts): the signed-in actor must hold `capability` in
  * the team. Anonymous → sign-in; unknown team, foreign team or missing capability → 404 (a page
  * never confirms that a team exists to someone outside it). Actions call the team services,
  * which run the same authorizeTeam check inside.

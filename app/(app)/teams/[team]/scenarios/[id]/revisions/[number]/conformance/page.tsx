@@ -4,18 +4,17 @@ import Link from "next/link";
 import { ConformanceResultTable } from "@/components/conformance/result-table";
 import { ConformanceUploadForm } from "@/components/conformance/upload-form";
 import { CurveChart } from "@/components/records/curve-chart";
+import { RevisionCrumb } from "@/components/scenarios/revision-crumb";
 import { Cautions } from "@/components/workbench/cautions";
-import { getDb } from "@/db/index";
 import { can } from "@/lib/shared/permissions";
-import { requireTeamRole } from "@/lib/server/access/guard";
 import { conformanceTraces } from "@/lib/server/handoff/conformance/curves";
 import {
   listConformanceChecks,
   loadConformanceCheck,
 } from "@/lib/server/handoff/conformance/service";
 import { orNotFound } from "@/lib/server/access/or-not-found";
+import { loadRevisionPage } from "@/lib/server/access/revision-page";
 import { parseScenarioFileOrThrow } from "@/lib/server/workspace/parse";
-import { revisionInTeam } from "@/lib/server/access/scope";
 
 export const metadata: Metadata = { title: "Conformance check" };
 
@@ -30,14 +29,15 @@ export default async function ConformancePage({
 }) {
   const { team, id, number } = await params;
   const { check } = await searchParams;
-  const ctx = await requireTeamRole(team, "team:read");
-  const db = getDb();
+  const { ctx, db, scenario, revision, scenarioUrl, base } = await loadRevisionPage({
+    team,
+    id,
+    number,
+  });
   const ref = { teamSlug: team, scenarioId: id, number };
-  const { scenario, revision } = await orNotFound(revisionInTeam(db, ctx.team.id, id, number));
   const setIds = parseScenarioFileOrThrow(revision.file).parameterSets.map((s) => s.id);
   const { items } = await listConformanceChecks(db, ctx.actor, ref);
   const shown = check ? await orNotFound(loadConformanceCheck(db, ctx.actor, ref, check)) : null;
-  const base = `/teams/${team}/scenarios/${id}/revisions/${number}`;
   const traces = shown
     ? conformanceTraces(
         shown.curves.history,
@@ -48,15 +48,11 @@ export default async function ConformancePage({
     : null;
   return (
     <div className="space-y-6">
-      <p className="text-sm">
-        <Link
-          className="text-verdigris-dark hover:underline"
-          href={`/teams/${team}/scenarios/${id}`}
-        >
-          {scenario.name}
-        </Link>{" "}
-        · revision {revision.number}
-      </p>
+      <RevisionCrumb
+        scenarioName={scenario.name}
+        scenarioUrl={scenarioUrl}
+        number={revision.number}
+      />
       <h1 className="font-display text-2xl font-semibold">Conformance check</h1>
       <p className="text-sm text-ink-soft">
         Upload the single-point history your finite-element implementation of this law wrote. Its

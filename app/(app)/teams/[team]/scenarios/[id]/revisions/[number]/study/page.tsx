@@ -3,14 +3,12 @@ import Link from "next/link";
 
 import { StudyForm } from "@/components/studies/study-form";
 import { StudyProgress } from "@/components/studies/study-progress";
+import { RevisionCrumb } from "@/components/scenarios/revision-crumb";
 import { Cautions } from "@/components/workbench/cautions";
-import { getDb } from "@/db/index";
 import { listStudiesForTeam } from "@/db/queries/studies";
-import { requireTeamRole } from "@/lib/server/access/guard";
+import { loadRevisionPage } from "@/lib/server/access/revision-page";
 import { can } from "@/lib/shared/permissions";
-import { orNotFound } from "@/lib/server/access/or-not-found";
 import { NUMERIC_PARAMETERS } from "@/lib/server/handoff/studies/schema";
-import { revisionInTeam } from "@/lib/server/access/scope";
 import { isUuid } from "@/lib/shared/uuid";
 
 export const metadata: Metadata = { title: "Parameter study" };
@@ -26,22 +24,16 @@ export default async function StudyPage({
 }) {
   const { team, id, number } = await params;
   const { study } = await searchParams;
-  const ctx = await requireTeamRole(team, "team:read");
-  const db = getDb();
-  const found = await orNotFound(revisionInTeam(db, ctx.team.id, id, number));
-  const base = `/teams/${team}/scenarios/${id}/revisions/${number}`;
+  const found = await loadRevisionPage({ team, id, number });
+  const { ctx, db, base } = found;
   const recent = await listStudiesForTeam(db, ctx.team.id);
   return (
     <div className="space-y-6">
-      <p className="text-sm">
-        <Link
-          className="text-verdigris-dark hover:underline"
-          href={`/teams/${team}/scenarios/${id}`}
-        >
-          {found.scenario.name}
-        </Link>{" "}
-        · revision {found.revision.number}
-      </p>
+      <RevisionCrumb
+        scenarioName={found.scenario.name}
+        scenarioUrl={found.scenarioUrl}
+        number={found.revision.number}
+      />
       <h1 className="font-display text-2xl font-semibold">Parameter study</h1>
       <p className="text-sm text-ink-soft">
         Runs this revision&apos;s path for many parameter sets on the team&apos;s queue. Every
