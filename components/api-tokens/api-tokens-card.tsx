@@ -2,7 +2,7 @@ import { getDb } from "@/db/index";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { listApiTokens } from "@/lib/server/accounts/api-tokens/manage";
 import { ROLE_LABELS } from "@/lib/shared/permissions";
-import { listTeamsForUser } from "@/lib/server/teams/queries";
+import { listTeamsForUser } from "@/db/queries/teams";
 
 import { Card } from "@/components/ui/card";
 

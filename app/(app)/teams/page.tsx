@@ -7,7 +7,7 @@ import { FormMessage } from "@/components/ui/form-message";
 import { getDb } from "@/db/index";
 import { ROLE_LABELS } from "@/lib/shared/permissions";
 import { getActor } from "@/lib/server/accounts/auth/session";
-import { listTeamsForUser } from "@/lib/server/teams/queries";
+import { listTeamsForUser } from "@/db/queries/teams";
 
 export const metadata: Metadata = { title: "Teams" };
 

@@ -5,7 +5,7 @@ import { Card } from "@/components/ui/card";
 import { getDb } from "@/db/index";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { ROLE_LABELS } from "@/lib/shared/permissions";
-import { listMembers } from "@/lib/server/teams/queries";
+import { listMembers } from "@/db/queries/teams";
 
 import { TeamNav } from "./team-nav";
 

@@ -7,7 +7,7 @@ import { Card } from "@/components/ui/card";
 import { getDb } from "@/db/index";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { can, canGrant, grantableRoles, ROLE_LABELS } from "@/lib/shared/permissions";
-import { listMembers, listOpenInvitations } from "@/lib/server/teams/queries";
+import { listMembers, listOpenInvitations } from "@/db/queries/teams";
 
 import { TeamNav } from "../team-nav";
 import { leaveTeamAction, removeMemberAction, revokeInvitationAction } from "./actions";

@@ -8,7 +8,7 @@ import { getDb } from "@/db/index";
 import { listScenariosForTeam } from "@/db/queries/scenarios";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { can } from "@/lib/shared/permissions";
-import { listMembers } from "@/lib/server/teams/queries";
+import { listMembers } from "@/db/queries/teams";
 import { scenarioListQuerySchema } from "@/lib/shared/validations/workspace";
 import { teamPages } from "@/lib/client/data/api-urls";
 import { listQueryString, PAGE_SIZE, parseListState } from "@/lib/client/data/list-query";

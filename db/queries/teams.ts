@@ -1,5 +1,3 @@
-import "server-only";
-
 import { and, asc, eq, gt, isNull } from "drizzle-orm";
 
 import type { Db } from "@/db/client";
@@ -7,7 +5,8 @@ import { invitations } from "@/db/schema/invitations";
 import { memberships, teams } from "@/db/schema/teams";
 import { users } from "@/db/schema/users";
 
-// Read-side queries for pages. They trust the caller to have authorized the team already.
+// Read-side queries for pages (teams of a user, members, open invitations). They trust the
+// caller to have authorized the team already.
 
 export async function listTeamsForUser(db: Db, userId: string) {
   return db
