@@ -26,7 +26,7 @@ export function ParameterSetsTable({ slug, canEdit, initial }: ParameterSetsTabl
     <div className="space-y-3">
       {list.isError ? <p className="text-sm text-kiln-dark">{messageOf(list.error)}</p> : null}
       {remove.isError ? <p className="text-sm text-kiln-dark">{messageOf(remove.error)}</p> : null}
-      <div className="overflow-x-auto rounded-lg border border-glaze-line bg-white/70">
+      <div className="relative overflow-x-auto rounded-lg border border-glaze-line bg-white/70">
         <table className="w-full text-left text-sm">
           <thead className="border-b border-glaze-line bg-glaze-deep/60 text-xs text-ink-soft">
             <tr>

@@ -51,7 +51,7 @@ export function ScenariosTable({ slug, authors, initial }: ScenariosTableProps) 
           {messageOf(list.error)}
         </p>
       ) : null}
-      <div className="overflow-x-auto rounded-lg border border-glaze-line bg-white/70">
+      <div className="relative overflow-x-auto rounded-lg border border-glaze-line bg-white/70">
         <table className="w-full text-left text-sm" aria-busy={list.isFetching || undefined}>
           <thead className="border-b border-glaze-line bg-glaze-deep/60 text-xs text-ink-soft">
             <tr>

@@ -120,8 +120,8 @@ export function Workbench({
           </Link>
         )}
       </div>
-      <div className="grid gap-4 md:grid-cols-[minmax(270px,300px)_minmax(0,1fr)] xl:grid-cols-[minmax(320px,390px)_minmax(0,1fr)]">
-        <div className="space-y-4">
+      <div className="grid grid-cols-1 gap-4 md:grid-cols-[minmax(270px,300px)_minmax(0,1fr)] xl:grid-cols-[minmax(320px,390px)_minmax(0,1fr)]">
+        <div className="min-w-0 space-y-4">
           <Panel id="sets" title="Parameter sets">
             <SetListPanel
               entries={m.entries}

@@ -29,69 +29,71 @@ export default async function MembersPage({ params }: { params: Promise<{ team: 
       <TeamNav slug={teamSlug} name={ctx.team.name} role={ctx.role} />
       <div className="space-y-6">
         <Card title="Members" id="member-list">
-          <table className="w-full text-left text-sm">
-            <thead className="text-ink-faint">
-              <tr>
-                <th scope="col" className="py-2 font-medium">
-                  Name
-                </th>
-                <th scope="col" className="py-2 font-medium">
-                  E-mail
-                </th>
-                <th scope="col" className="py-2 font-medium">
-                  Role
-                </th>
-                <th scope="col" className="py-2 font-medium">
-                  <span className="sr-only">Actions</span>
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-glaze-line">
-              {members.map((m) => {
-                const isMe = m.userId === ctx.actor.id;
-                const manage =
-                  !isMe && can(ctx.role, "member:change-role") && canGrant(ctx.role, m.role);
-                return (
-                  <tr key={m.userId} data-testid={`member-${m.email}`}>
-                    <td className="py-2">
-                      {m.name}
-                      {isMe ? " (you)" : ""}
-                    </td>
-                    <td className="py-2 text-ink-soft">{m.email}</td>
-                    <td className="py-2">
-                      {manage ? (
-                        <MemberRoleForm
-                          teamSlug={teamSlug}
-                          userId={m.userId}
-                          memberName={m.name}
-                          role={m.role}
-                          roles={roles}
-                        />
-                      ) : (
-                        <span data-testid="member-role">{ROLE_LABELS[m.role]}</span>
-                      )}
-                    </td>
-                    <td className="py-2 text-right">
-                      {isMe ? (
-                        <ActionButton
-                          label="Leave team"
-                          confirmText="Leave this team?"
-                          action={leaveTeamAction.bind(null, { teamSlug })}
-                        />
-                      ) : manage && can(ctx.role, "member:remove") ? (
-                        <ActionButton
-                          label="Remove"
-                          variant="danger"
-                          confirmText={`Remove ${m.name} from the team?`}
-                          action={removeMemberAction.bind(null, { teamSlug, userId: m.userId })}
-                        />
-                      ) : null}
-                    </td>
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
+          <div className="relative overflow-x-auto">
+            <table className="w-full text-left text-sm">
+              <thead className="text-ink-faint">
+                <tr>
+                  <th scope="col" className="py-2 font-medium">
+                    Name
+                  </th>
+                  <th scope="col" className="py-2 font-medium">
+                    E-mail
+                  </th>
+                  <th scope="col" className="py-2 font-medium">
+                    Role
+                  </th>
+                  <th scope="col" className="py-2 font-medium">
+                    <span className="sr-only">Actions</span>
+                  </th>
+                </tr>
+              </thead>
+              <tbody className="divide-y divide-glaze-line">
+                {members.map((m) => {
+                  const isMe = m.userId === ctx.actor.id;
+                  const manage =
+                    !isMe && can(ctx.role, "member:change-role") && canGrant(ctx.role, m.role);
+                  return (
+                    <tr key={m.userId} data-testid={`member-${m.email}`}>
+                      <td className="py-2">
+                        {m.name}
+                        {isMe ? " (you)" : ""}
+                      </td>
+                      <td className="py-2 text-ink-soft">{m.email}</td>
+                      <td className="py-2">
+                        {manage ? (
+                          <MemberRoleForm
+                            teamSlug={teamSlug}
+                            userId={m.userId}
+                            memberName={m.name}
+                            role={m.role}
+                            roles={roles}
+                          />
+                        ) : (
+                          <span data-testid="member-role">{ROLE_LABELS[m.role]}</span>
+                        )}
+                      </td>
+                      <td className="py-2 text-right">
+                        {isMe ? (
+                          <ActionButton
+                            label="Leave team"
+                            confirmText="Leave this team?"
+                            action={leaveTeamAction.bind(null, { teamSlug })}
+                          />
+                        ) : manage && can(ctx.role, "member:remove") ? (
+                          <ActionButton
+                            label="Remove"
+                            variant="danger"
+                            confirmText={`Remove ${m.name} from the team?`}
+                            action={removeMemberAction.bind(null, { teamSlug, userId: m.userId })}
+                          />
+                        ) : null}
+                      </td>
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </table>
+          </div>
         </Card>
         {mayInvite ? (
           <Card title="Invite someone" id="invite">
