@@ -1,11 +1,6 @@
 import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
 
-const VERDICTS: Record<string, string> = {
-  draft: "Draft: not submitted for review",
-  in_review: "In review: no verdict yet",
-  approved: "Approved",
-  changes_requested: "Changes requested",
-};
+import { verdictWords } from "./verdict-words";
 
 type Comment = CalibrationReport["comments"][number];
 
@@ -34,7 +29,7 @@ export function ReviewSection({ report }: { report: CalibrationReport }) {
   return (
     <div className="space-y-3 text-sm">
       <p data-testid="report-verdict" className="text-base">
-        Verdict: <strong>{VERDICTS[review.state] ?? review.state}</strong>
+        Verdict: <strong>{verdictWords(review.state)}</strong>
         {review.by ? ` by ${review.by.name}` : ""}
         {review.at ? ` on ${review.at.slice(0, 10)}` : ""}
       </p>

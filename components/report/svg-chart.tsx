@@ -1,22 +1,32 @@
+import { SET_COLORS } from "@/lib/client/workbench/set-colors";
 import type { ChartGeometry } from "@/lib/server/handoff/report/svg-chart";
 
-const COLOURS = ["#2f7a74", "#b4532a", "#1f2a30", "#8c6d1f", "#5a4a8c", "#3b7a2f"];
+const DASHES = [undefined, "5 3", "1.5 2.5"];
 
-/** A static chart for print: axes, ticks, one path per series, a legend. */
+/**
+ * A static chart for print: axes, ticks, one path per series, a legend. Series come in groups
+ * of `seriesPerSet` per parameter set, in the file's order: each set keeps the colour it has on
+ * screen, and the second and third series of a set (d2, …) are dashed and dotted.
+ */
 export function SvgChart({
   title,
   chart,
   xTitle,
   yTitle,
+  seriesPerSet = 1,
 }: {
   title: string;
   chart: ChartGeometry;
   xTitle: string;
   yTitle: string;
+  seriesPerSet?: number;
 }) {
   const bottom = chart.height - 32;
+  const colour = (i: number) => SET_COLORS[Math.floor(i / seriesPerSet) % SET_COLORS.length];
+  const dash = (i: number) => DASHES[(i % seriesPerSet) % DASHES.length];
   return (
-    <figure className="break-inside-avoid">
+    // In print one chart per row, 160 mm wide: the 9-unit tick labels then print at 8.5 pt.
+    <figure className="break-inside-avoid print:mx-auto print:w-[160mm]">
       <figcaption className="text-sm font-semibold">{title}</figcaption>
       <svg
         viewBox={`0 0 ${chart.width} ${chart.height + 14}`}
@@ -69,15 +79,27 @@ export function SvgChart({
             key={p.name}
             d={p.d}
             fill="none"
-            stroke={COLOURS[i % COLOURS.length]}
+            stroke={colour(i)}
+            strokeDasharray={dash(i)}
             strokeWidth={1.4}
           />
         ))}
       </svg>
       <p className="text-xs text-ink-soft">
         {chart.paths.map((p, i) => (
-          <span key={p.name} className="mr-3">
-            <span style={{ color: COLOURS[i % COLOURS.length] }}>■</span> {p.name}
+          <span key={p.name} className="mr-3 inline-flex items-center gap-1">
+            <svg width="22" height="8" aria-hidden="true">
+              <line
+                x1="1"
+                x2="21"
+                y1="4"
+                y2="4"
+                stroke={colour(i)}
+                strokeWidth="2"
+                strokeDasharray={dash(i)}
+              />
+            </svg>
+            {p.name}
           </span>
         ))}
       </p>

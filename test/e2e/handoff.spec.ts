@@ -144,9 +144,19 @@ describe("hand-off to the simulation team", () => {
     await rv.emulateMedia({ media: "print" });
     const pdf = await rv.pdf({ format: "A4", printBackground: true });
     // Lines wrap anywhere in a PDF: compare with runs of white space made single spaces.
-    const text = (await new PDFParse({ data: new Uint8Array(pdf) }).getText()).text.replace(
-      /\s+/g,
-      " ",
+    const parsed = await new PDFParse({ data: new Uint8Array(pdf) }).getText();
+    const text = parsed.text.replace(/\s+/g, " ");
+    // Every printed page carries the revision stamp and "Page n of N" in its margins.
+    const pageCount = parsed.pages.length;
+    expect(pageCount).toBeGreaterThan(1);
+    for (const page of parsed.pages) {
+      const pageText = page.text.replace(/\s+/g, " ");
+      expect(pageText).toContain(`Page ${page.num} of ${pageCount}`);
+      expect(pageText).toMatch(/· revision 1 ·/);
+    }
+    // The sign-off block: verdict, reviewer, date.
+    expect(text).toMatch(
+      /Sign-off Verdict Approved Reviewer Rita Reviewer \(invented\) Date \d{4}-\d{2}-\d{2}/,
     );
     expect(text).toContain("Parameters");
     expect(text).toMatch(/E1 MPa 11000/);

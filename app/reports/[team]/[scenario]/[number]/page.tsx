@@ -4,9 +4,11 @@ import type { ReactNode } from "react";
 
 import { ConformanceSummary } from "@/components/report/conformance-summary";
 import { ParameterTable } from "@/components/report/parameter-table";
+import { PageStamp } from "@/components/report/page-stamp";
 import { PrintButton } from "@/components/report/print-button";
 import { ProvenanceList } from "@/components/report/provenance-list";
 import { ReviewSection } from "@/components/report/review-section";
+import { SignOff } from "@/components/report/sign-off";
 import { SvgChart } from "@/components/report/svg-chart";
 import { CAUTION_TEXT } from "@/components/workbench/cautions";
 import { getDb } from "@/db/index";
@@ -20,8 +22,12 @@ type Params = { team: string; scenario: string; number: string };
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
-    <section className="mt-6 break-inside-avoid-page">
-      <h2 className="mb-2 border-b border-ink font-display text-lg font-semibold">{title}</h2>
+    // Sections may break across pages (a whole section pushed to page 2 left page 1 empty);
+    // a heading never stands alone at the foot of a page.
+    <section className="mt-6">
+      <h2 className="mb-2 break-after-avoid border-b border-ink font-display text-lg font-semibold">
+        {title}
+      </h2>
       {children}
     </section>
   );
@@ -43,7 +49,10 @@ export default async function CalibrationReportPage({ params }: { params: Promis
       id="main"
       className="mx-auto max-w-4xl bg-white px-8 py-6 text-ink print:max-w-none print:p-0"
     >
-      <style>{"@page { size: A4; margin: 16mm 14mm; }"}</style>
+      <PageStamp
+        stamp={`${scenario.name} · revision ${revision.number} · ${report.team.name}`}
+        footer="Craquelure calibration report · no design allowable"
+      />
       <div className="flex items-start justify-between gap-4">
         <div>
           <p className="text-xs uppercase tracking-wide text-ink-faint">
@@ -71,24 +80,25 @@ export default async function CalibrationReportPage({ params }: { params: Promis
         <ProvenanceList items={report.provenance} />
       </Section>
       <Section title="Key curves">
-        <div className="grid grid-cols-2 gap-4">
+        <div className="grid grid-cols-2 gap-4 print:block print:space-y-4">
           <SvgChart
-            title="Scenario path: sig11 against eps11"
+            title="Scenario path: σ11 against ε11"
             chart={report.charts.stressStrain}
-            xTitle="eps11 (mm/mm)"
-            yTitle="sig11 (MPa)"
+            xTitle="ε11 (mm/mm)"
+            yTitle="σ11 (MPa)"
           />
           <SvgChart
             title="Scenario path: damage against increment"
             chart={report.charts.damage}
             xTitle="increment"
-            yTitle="d (–)"
+            yTitle="damage d1, d2 (–)"
+            seriesPerSet={2}
           />
           <SvgChart
             title="Uniaxial tension along 1 (reference case)"
             chart={report.charts.tension}
-            xTitle="eps11 (mm/mm)"
-            yTitle="sig11 (MPa)"
+            xTitle="ε11 (mm/mm)"
+            yTitle="σ11 (MPa)"
           />
         </div>
         <ul className="mt-2 text-xs text-ink-soft">
@@ -111,6 +121,7 @@ export default async function CalibrationReportPage({ params }: { params: Promis
       <Section title="Conformance checks">
         <ConformanceSummary checks={report.checks} />
       </Section>
+      <SignOff report={report} />
       <p className="mt-8 border-t border-glaze-line pt-2 text-xs text-ink-faint">
         Generated {new Date().toISOString().slice(0, 16).replace("T", " ")} UTC. {CAUTION_TEXT}
       </p>
