@@ -6,6 +6,7 @@ import { identify } from "@/lib/calibration/identify";
 import { shearWeightByReplay } from "@/lib/calibration/shear-weight";
 import { runPath } from "@/lib/mechanics/driver";
 import type { MaterialParams } from "@/lib/mechanics/types";
+import { SET_A } from "../mechanics/helpers";
 import { cyclicRecord } from "./driver-records";
 
 const tension = {
@@ -47,22 +48,7 @@ describe("coupling b", () => {
   });
 
   it("(c) off-axis tension at 30° of an orthotropic set, through the driver: b = 0.4", () => {
-    // spec D.14 set A
-    const setA: MaterialParams = {
-      ...DEMO_PARAMS,
-      E1: 9000,
-      E2: 6000,
-      nu12: 0.35,
-      G12: 2500,
-      Y0_1: 0.02,
-      Y0_2: 0.03,
-      a1: 0.5,
-      a2: 0.7,
-      alpha: 0.004,
-      beta: 0.006,
-      b: 0.4,
-      k6: 0.8,
-    };
+    const setA: MaterialParams = { ...DEMO_PARAMS, ...SET_A }; // spec D.14 set A
     const points = cyclicRecord(setA, "tension-1", [0.003, 0.006, 0.009], {
       thetaD: -30,
       increments: 30,

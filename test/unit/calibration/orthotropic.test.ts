@@ -3,23 +3,10 @@ import { describe, expect, it } from "vitest";
 import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
 import { identify } from "@/lib/calibration/identify";
 import type { MaterialParams } from "@/lib/mechanics/types";
+import { SET_A } from "../mechanics/helpers";
 import { cyclicRecord } from "./driver-records";
 
-const setA: MaterialParams = {
-  ...DEMO_PARAMS,
-  E1: 9000,
-  E2: 6000,
-  nu12: 0.35,
-  G12: 2500,
-  Y0_1: 0.02,
-  Y0_2: 0.03,
-  a1: 0.5,
-  a2: 0.7,
-  alpha: 0.004,
-  beta: 0.006,
-  b: 0.4,
-  k6: 0.8,
-};
+const setA: MaterialParams = { ...DEMO_PARAMS, ...SET_A };
 const rel = (x: number, ref: number) => Math.abs(x / ref - 1);
 
 describe("orthotropic identification from tension along 1 and along 2", () => {

@@ -5,6 +5,7 @@ import { DEMO_PARAMS, demoCyclicTension } from "@/lib/calibration/demo-curves";
 import { identify } from "@/lib/calibration/identify";
 import { recordPointsFor } from "@/lib/calibration/record-points";
 import { TEST_TYPES } from "@/lib/csv/record-schema";
+import { checkParams } from "@/lib/mechanics/validate";
 
 describe("identify on arbitrary curves", () => {
   it("returns a result for any finite or non-finite samples and any test type", () => {
@@ -23,7 +24,26 @@ describe("identify on arbitrary curves", () => {
             stress: Float64Array.from(rows, (r) => r[1]),
           };
           const result = identify([{ id: "x", testType, points }], { base: DEMO_PARAMS });
-          expect(result.params.law).toBe("sqrtY");
+          const q = result.params;
+          // without a tension-2 record the set is in-plane isotropic: axis 2 copies axis 1
+          const isotropic = testType !== "tension-2";
+          const copied = isotropic ? ["E2", "Y0_2", "a2", "beta", "G12"] : [];
+          if (isotropic) {
+            expect([q.E2, q.Y0_2, q.a2, q.beta]).toEqual([q.E1, q.Y0_1, q.a1, q.alpha]);
+            expect(q.G12).toBeCloseTo(q.E1 / (2 * (1 + q.nu12)), 9);
+          }
+          // every value the records gave is finite; the rest stay the base set's
+          for (const [key, value] of Object.entries(q)) {
+            const k = key as keyof typeof DEMO_PARAMS;
+            if (result.identified.includes(k)) expect(Number.isFinite(value)).toBe(true);
+            else if (!copied.includes(k)) expect(value).toBe(DEMO_PARAMS[k]);
+          }
+          // an inadmissible set is never replayed, and the notes say which field is off
+          const problems = checkParams(result.params);
+          if (problems.length > 0) {
+            expect(result.notes.join(" ")).toContain(problems[0]);
+            expect(result.records[0].validation).toBeNull();
+          }
         },
       ),
       { numRuns: 150 },

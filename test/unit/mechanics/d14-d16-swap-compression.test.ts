@@ -1,23 +1,10 @@
 /** Spec damage-law.md D.14 (axis swap) and D.16 (pure compression). */
 import { describe, expect, it } from "vitest";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
-import { DEMO, E, S, expectRel, last, leg, run } from "./helpers";
+import { DEMO, E, S, SET_A, expectRel, last, leg, run } from "./helpers";
 
 describe("D.14 axis swap", () => {
-  const A: Partial<MaterialParams> = {
-    E1: 9000,
-    E2: 6000,
-    nu12: 0.35,
-    G12: 2500,
-    Y0_1: 0.02,
-    Y0_2: 0.03,
-    a1: 0.5,
-    a2: 0.7,
-    alpha: 0.004,
-    beta: 0.006,
-    b: 0.4,
-    k6: 0.8,
-  };
+  const A: Partial<MaterialParams> = SET_A;
   const B: Partial<MaterialParams> = {
     ...A,
     E1: 6000,

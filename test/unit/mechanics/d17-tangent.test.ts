@@ -4,7 +4,7 @@ import { PathRun } from "@/lib/mechanics/driver";
 import { localStepFrom } from "@/lib/mechanics/single-step";
 import { D1, D2, EPS } from "@/lib/mechanics/state";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
-import { DEMO, E, S, leg } from "./helpers";
+import { DEMO, E, S, SET_A, leg } from "./helpers";
 
 const H = 1e-8;
 
@@ -37,19 +37,7 @@ function expectTangent(ct: Float64Array, fd: number[], rel: number) {
 }
 
 const ORTHO_ROTATED: MaterialParams = {
-  ...DEMO,
-  E1: 9000,
-  E2: 6000,
-  nu12: 0.35,
-  G12: 2500,
-  Y0_1: 0.02,
-  Y0_2: 0.03,
-  a1: 0.5,
-  a2: 0.7,
-  alpha: 0.004,
-  beta: 0.006,
-  b: 0.4,
-  k6: 0.8,
+  ...SET_A,
   thetaD: (0.3 * 180) / Math.PI, // 0.3 rad, as in the spec's reference check (C.5)
   dcrit: 0.9,
 };

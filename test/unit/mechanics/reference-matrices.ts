@@ -4,23 +4,10 @@
  */
 import { Matrix, solve } from "ml-matrix";
 import type { MaterialParams } from "@/lib/mechanics/types";
-import { DEMO } from "./helpers";
+import { SET_A } from "./helpers";
 
-export const P: MaterialParams = {
-  ...DEMO,
-  E1: 9000,
-  E2: 6000,
-  nu12: 0.35,
-  G12: 2500,
-  Y0_1: 0.02,
-  Y0_2: 0.03,
-  a1: 0.5,
-  a2: 0.7,
-  alpha: 0.004,
-  beta: 0.006,
-  b: 0.4,
-  k6: 0.8,
-};
+/** Spec D.14 set A (defined once in helpers.ts). */
+export const P: MaterialParams = SET_A;
 
 export function mulberry32(seed: number) {
   let t = seed >>> 0;

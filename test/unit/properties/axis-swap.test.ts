@@ -10,6 +10,7 @@ import { describe, expect, it } from "vitest";
 import { runPath } from "@/lib/mechanics/driver";
 import type { Leg, MaterialParams, ResultColumn, ResultColumns } from "@/lib/mechanics/types";
 import { parameterSetSchema, toMaterialParams } from "@/lib/scenario/parameter-set-schema";
+import { SET_A } from "../mechanics/helpers";
 import { paramsAndPath } from "./arbitraries";
 
 export function swapParams(p: MaterialParams): MaterialParams {
@@ -105,13 +106,7 @@ describe("axis swap (spec D.14)", () => {
 
   it("the comparison notices an unswapped response (a set whose axes differ)", () => {
     // spec D.14 set A: E1 = 9000, E2 = 6000 … is not its own mirror image.
-    const setA = toMaterialParams({
-      id: "A",
-      ...parameterSetSchema.parse({
-        ...{ E1: 9000, E2: 6000, nu12: 0.35, G12: 2500, Y0_1: 0.02, Y0_2: 0.03, a1: 0.5, a2: 0.7 },
-        ...{ alpha: 0.004, beta: 0.006, b: 0.4, k6: 0.8, dcrit: 0.45 },
-      }),
-    });
+    const setA = toMaterialParams({ id: "A", ...parameterSetSchema.parse(SET_A) });
     const legs: Leg[] = [
       { control: ["strain", "strain", "strain"], target: [0.006, 0.002, 0.004], increments: 20 },
     ];
