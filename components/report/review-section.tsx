@@ -1,3 +1,4 @@
+import { importedPersonText, importedVerdictText } from "@/lib/shared/imported-names";
 import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
 
 import { verdictWords } from "./verdict-words";
@@ -8,7 +9,10 @@ function Thread({ c }: { c: Comment }) {
   return (
     <li className="break-inside-avoid">
       <p className="text-xs text-ink-faint">
-        {c.author?.name ?? "former member"}, {c.createdAt.slice(0, 16).replace("T", " ")}
+        {c.importedAuthor != null
+          ? importedPersonText(c.importedAuthor)
+          : (c.author?.name ?? "former member")}
+        , {c.createdAt.slice(0, 16).replace("T", " ")}
         {c.increment !== null ? ` · increment ${c.increment}` : ""}
       </p>
       <p className="whitespace-pre-wrap">{c.body}</p>
@@ -30,7 +34,11 @@ export function ReviewSection({ report }: { report: CalibrationReport }) {
     <div className="space-y-3 text-sm">
       <p data-testid="report-verdict" className="text-base">
         Verdict: <strong>{verdictWords(review.state)}</strong>
-        {review.by ? ` by ${review.by.name}` : ""}
+        {review.importedBy != null
+          ? ` (${importedVerdictText(review.state, review.importedBy)})`
+          : review.by
+            ? ` by ${review.by.name}`
+            : ""}
         {review.at ? ` on ${review.at.slice(0, 10)}` : ""}
       </p>
       {report.reviews.length > 0 ? (
@@ -38,7 +46,10 @@ export function ReviewSection({ report }: { report: CalibrationReport }) {
           {report.reviews.map((e) => (
             <li key={e.id}>
               {e.at.slice(0, 16).replace("T", " ")}: {e.from.replace("_", " ")} →{" "}
-              {e.to.replace("_", " ")} by {e.actor?.name ?? "former member"}
+              {e.to.replace("_", " ")} by{" "}
+              {e.importedActor != null
+                ? importedPersonText(e.importedActor)
+                : (e.actor?.name ?? "former member")}
               {e.note ? ` (${e.note})` : ""}
             </li>
           ))}

@@ -1,4 +1,5 @@
 import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
+import { importedVerdictText } from "@/lib/shared/imported-names";
 
 import { verdictWords } from "./verdict-words";
 
@@ -10,7 +11,12 @@ export function SignOff({ report }: { report: CalibrationReport }) {
   const { review } = report.revision;
   const rows: [string, string][] = [
     ["Verdict", verdictWords(review.state)],
-    ["Reviewer", review.by?.name ?? "—"],
+    [
+      "Reviewer",
+      review.importedBy != null
+        ? importedVerdictText(review.state, review.importedBy)
+        : (review.by?.name ?? "—"),
+    ],
     ["Date", review.at ? review.at.slice(0, 10) : "—"],
     ["Revision", `${report.revision.number}, saved ${report.revision.createdAt.slice(0, 10)}`],
   ];

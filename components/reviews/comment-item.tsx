@@ -5,6 +5,7 @@ import { useState } from "react";
 import { formatWhen, personName } from "@/lib/client/data/format";
 import { isPending, type NewComment } from "@/lib/client/data/optimistic-comments";
 import type { CommentNode } from "@/lib/client/data/types";
+import { importedPersonText } from "@/lib/shared/imported-names";
 
 import { CommentForm } from "./comment-form";
 
@@ -22,8 +23,12 @@ export function CommentItem({ comment, canReply, maxIncrement, onReply }: Commen
   return (
     <li className={pending ? "opacity-60" : undefined} data-testid="comment">
       <p className="text-xs text-ink-faint">
-        <span className="font-medium text-ink">{personName(comment.author)}</span>,{" "}
-        {pending ? "sending…" : formatWhen(comment.createdAt)}
+        <span className="font-medium text-ink">
+          {comment.importedAuthor != null
+            ? importedPersonText(comment.importedAuthor)
+            : personName(comment.author)}
+        </span>
+        , {pending ? "sending…" : formatWhen(comment.createdAt)}
         {comment.editedAt ? " (edited)" : ""}
         {comment.increment !== null ? (
           <span className="ml-2 rounded bg-verdigris-light px-1.5 text-verdigris-dark">

@@ -8,6 +8,7 @@ import { Panel } from "@/components/ui/panel";
 import { MAIL_QUEUED_NOTICE } from "@/lib/shared/mail-types";
 import { messageOf } from "@/lib/client/data/api-fetch";
 import { formatWhen, personName } from "@/lib/client/data/format";
+import { importedPersonText, importedVerdictText } from "@/lib/shared/imported-names";
 import {
   REVIEW_ACTION_LABELS,
   reviewActionsFor,
@@ -43,7 +44,11 @@ export function ReviewPanel(props: ReviewPanelProps) {
     <Panel id="review" title={`Review of revision ${number}`} aside={<ReviewBadge state={state} />}>
       <div className="space-y-4 text-sm">
         {review.isError ? <p className="text-kiln-dark">{messageOf(review.error)}</p> : null}
-        {review.data?.revision.review.by && state !== "draft" ? (
+        {review.data?.revision.review.importedBy != null && state !== "draft" ? (
+          <p className="text-ink-soft" data-testid="review-summary">
+            {importedVerdictText(state, review.data.revision.review.importedBy)}
+          </p>
+        ) : review.data?.revision.review.by && state !== "draft" ? (
           <p className="text-ink-soft" data-testid="review-summary">
             {reviewStateLabel(state)} — {personName(review.data.revision.review.by)},{" "}
             {formatWhen(review.data.revision.review.at)}
@@ -117,7 +122,11 @@ export function ReviewPanel(props: ReviewPanelProps) {
           <ol className="space-y-1 border-l-2 border-glaze-line pl-3" aria-label="Review history">
             {review.data.history.map((h) => (
               <li key={h.id}>
-                <span className="font-medium">{personName(h.actor)}</span>{" "}
+                <span className="font-medium">
+                  {h.importedActor != null
+                    ? importedPersonText(h.importedActor)
+                    : personName(h.actor)}
+                </span>{" "}
                 {reviewStateLabel(h.from)} → {reviewStateLabel(h.to)}
                 <span className="text-ink-faint">, {formatWhen(h.at)}</span>
                 {h.note ? <p className="whitespace-pre-wrap text-ink-soft">{h.note}</p> : null}

@@ -16,6 +16,7 @@ export async function listCommentsOfRevision(db: Executor, revisionId: string) {
       increment: revisionComments.increment,
       createdAt: revisionComments.createdAt,
       editedAt: revisionComments.editedAt,
+      importedAuthor: revisionComments.importedAuthor,
     })
     .from(revisionComments)
     .leftJoin(users, eq(users.id, revisionComments.authorId))

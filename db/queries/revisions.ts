@@ -21,6 +21,7 @@ const metaColumns = {
   reviewState: scenarioRevisions.reviewState,
   reviewBy: personRef(reviewer.id, reviewer.name),
   reviewAt: scenarioRevisions.reviewAt,
+  importedReviewBy: scenarioRevisions.importedReviewBy,
 };
 
 function metaQuery(db: Executor) {
@@ -44,6 +45,8 @@ export function toRevisionMeta(row: MetaRow) {
       state: row.reviewState,
       by: row.reviewBy,
       at: row.reviewAt?.toISOString() ?? null,
+      /** Name from a team import, as text: who the file said gave this verdict. */
+      importedBy: row.importedReviewBy,
     },
   };
 }
@@ -83,6 +86,7 @@ export async function listReviewEvents(db: Executor, revisionId: string) {
       actor: personRef(actor.id, actor.name),
       note: reviewEvents.note,
       at: reviewEvents.at,
+      importedActor: reviewEvents.importedActor,
     })
     .from(reviewEvents)
     .leftJoin(actor, eq(actor.id, reviewEvents.actorId))

@@ -1,9 +1,10 @@
-import { asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, inArray } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { revisionComments } from "@/db/schema/comments";
 import { parameterSets } from "@/db/schema/parameter-sets";
 import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { memberships } from "@/db/schema/teams";
 import { users } from "@/db/schema/users";
 
 /** Every row a team export needs, in stable order. */
@@ -57,13 +58,18 @@ export async function loadPeople(db: Executor, ids: string[]) {
   return new Map(rows.map((r) => [r.id, { email: r.email, name: r.name }]));
 }
 
-/** User ids for the given e-mail addresses (those that have an account here). */
-export async function findUsersByEmail(db: Executor, emails: string[]) {
+/**
+ * User ids for the given e-mail addresses, among the current members of one team only. An
+ * import may name anyone; matching outside the team would let a file claim work by strangers
+ * and would tell the importer which addresses have an account here.
+ */
+export async function findTeamMembersByEmail(db: Executor, teamId: string, emails: string[]) {
   const unique = [...new Set(emails.map((e) => e.toLowerCase()))];
   if (unique.length === 0) return new Map<string, string>();
   const rows = await db
     .select({ id: users.id, email: users.email })
     .from(users)
+    .innerJoin(memberships, and(eq(memberships.userId, users.id), eq(memberships.teamId, teamId)))
     .where(inArray(users.email, unique));
   return new Map(rows.map((r) => [r.email, r.id]));
 }

@@ -28,6 +28,8 @@ export const revisionComments = pgTable(
     increment: integer("increment"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     editedAt: timestamp("edited_at", { withTimezone: true }),
+    // Imported comment: the author's name from the file, as text (author_id stays empty).
+    importedAuthor: text("imported_author"),
   },
   (t) => [index("revision_comments_revision_idx").on(t.revisionId, t.createdAt)],
 );

@@ -69,6 +69,9 @@ export const scenarioRevisions = pgTable(
     reviewState: reviewState("review_state").notNull().default("draft"),
     reviewBy: uuid("review_by").references(() => users.id, { onDelete: "set null" }),
     reviewAt: timestamp("review_at", { withTimezone: true }),
+    // Set only by a team import: the reviewer's name as the file gave it. An imported sign-off
+    // is text, never a user of this installation (the file could name anyone).
+    importedReviewBy: text("imported_review_by"),
   },
   // The arbiter of concurrent saves: two saves can never both become number N.
   (t) => [unique("scenario_revisions_number_uq").on(t.scenarioId, t.number)],
@@ -86,6 +89,8 @@ export const reviewEvents = pgTable(
     actorId: uuid("actor_id").references(() => users.id, { onDelete: "set null" }),
     note: text("note").notNull().default(""),
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
+    // Imported history: the actor's name from the file, as text (actor_id stays empty).
+    importedActor: text("imported_actor"),
   },
   (t) => [index("review_events_revision_idx").on(t.revisionId, t.at)],
 );

@@ -22,6 +22,7 @@ export function withPendingComment(
     author,
     body: input.body,
     increment: input.increment ?? null,
+    importedAuthor: null,
     createdAt: now,
     editedAt: null,
     replies: [],

@@ -43,6 +43,9 @@ export async function exportTeam(
     ].filter((id): id is string => id !== null),
   );
   const who = (id: string | null): ExportPerson => (id ? (people.get(id) ?? null) : null);
+  // Imported history stays text on the way out too: a name, no address to match on.
+  const whoOrText = (id: string | null, text: string | null): ExportPerson =>
+    text !== null ? { email: "", name: text } : who(id);
   const revisionsOf = groupBy(c.revisionRows, (r) => r.scenarioId);
   const eventsOf = groupBy(c.eventRows, (r) => r.revisionId);
   const commentsOf = groupBy(c.commentRows, (r) => r.revisionId);
@@ -73,18 +76,22 @@ export async function exportTeam(
         message: r.message,
         file: r.file,
         createdAt: iso(r.createdAt),
-        review: { state: r.reviewState, by: who(r.reviewBy), at: isoOrNull(r.reviewAt) },
+        review: {
+          state: r.reviewState,
+          by: whoOrText(r.reviewBy, r.importedReviewBy),
+          at: isoOrNull(r.reviewAt),
+        },
         reviewEvents: (eventsOf.get(r.id) ?? []).map((e) => ({
           from: e.fromState,
           to: e.toState,
-          actor: who(e.actorId),
+          actor: whoOrText(e.actorId, e.importedActor),
           note: e.note,
           at: iso(e.at),
         })),
         comments: (commentsOf.get(r.id) ?? []).map((m) => ({
           key: m.id,
           parentKey: m.parentId,
-          author: who(m.authorId),
+          author: whoOrText(m.authorId, m.importedAuthor),
           body: m.body,
           increment: m.increment,
           createdAt: iso(m.createdAt),

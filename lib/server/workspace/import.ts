@@ -5,7 +5,7 @@ import { randomUUID } from "node:crypto";
 import { count, eq } from "drizzle-orm";
 
 import type { Db, Executor } from "@/db/client";
-import { findUsersByEmail } from "@/db/queries/team-export";
+import { findTeamMembersByEmail } from "@/db/queries/team-export";
 import { revisionComments } from "@/db/schema/comments";
 import { parameterSets, type ParameterSetProvenance } from "@/db/schema/parameter-sets";
 import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
@@ -24,8 +24,6 @@ export interface TeamImportResponse {
   revisions: number;
   comments: number;
   parameterSets: number;
-  /** People named in the file who have no account here: their authorship is left empty. */
-  unmatchedPeople: string[];
 }
 
 const CHUNK = 500;
@@ -34,17 +32,22 @@ async function insertChunked<T>(rows: T[], insert: (chunk: T[]) => Promise<unkno
   for (let i = 0; i < rows.length; i += CHUNK) await insert(rows.slice(i, i + CHUNK));
 }
 
-function peopleIn(doc: TeamExport): string[] {
+/**
+ * Authors of content (sets, scenarios, revisions) that may become users: matched only to
+ * current members of the target team. Review history and comments never do (see below).
+ */
+function authorsIn(doc: TeamExport): string[] {
   const all: ExportPerson[] = [];
   for (const s of doc.parameterSets) all.push(s.createdBy, s.updatedBy);
   for (const s of doc.scenarios) {
-    all.push(s.createdBy);
-    for (const r of s.revisions) {
-      all.push(r.author, r.review.by, ...r.reviewEvents.map((e) => e.actor));
-      all.push(...r.comments.map((c) => c.author));
-    }
+    all.push(s.createdBy, ...s.revisions.map((r) => r.author));
   }
   return all.filter((p): p is NonNullable<ExportPerson> => p !== null).map((p) => p.email);
+}
+
+/** Name as text for imported review history and comments; "" when the file named nobody. */
+function nameOf(p: ExportPerson): string {
+  return p?.name.trim() || p?.email || "";
 }
 
 async function assertEmpty(db: Executor, teamId: string) {
@@ -70,8 +73,7 @@ export async function importTeam(
   const ctx = await authorizeTeam(db, actor, teamSlug, "team:import");
   const doc = parseWithPath(teamExportSchema, input);
   checkTeamExport(doc);
-  const emails = peopleIn(doc);
-  const known = await findUsersByEmail(db, emails);
+  const known = await findTeamMembersByEmail(db, ctx.team.id, authorsIn(doc));
   const idOf = (p: ExportPerson) => (p ? (known.get(p.email.toLowerCase()) ?? null) : null);
   const at = (iso: string) => new Date(iso);
   const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
@@ -118,7 +120,9 @@ export async function importTeam(
         file: r.file,
         createdAt: at(r.createdAt),
         reviewState: r.review.state,
-        reviewBy: idOf(r.review.by),
+        // A sign-off in a file proves nothing here: kept as the file's text, never as a user.
+        reviewBy: null,
+        importedReviewBy: r.review.state === "draft" ? null : nameOf(r.review.by),
         reviewAt: at0(r.review.at),
       });
       for (const e of r.reviewEvents) {
@@ -126,7 +130,8 @@ export async function importTeam(
           revisionId,
           fromState: e.from,
           toState: e.to,
-          actorId: idOf(e.actor),
+          actorId: null,
+          importedActor: nameOf(e.actor),
           note: e.note,
           at: at(e.at),
         });
@@ -138,7 +143,8 @@ export async function importTeam(
           id: newId.get(c.key)!,
           revisionId,
           parentId: c.parentKey ? newId.get(c.parentKey)! : null,
-          authorId: idOf(c.author),
+          authorId: null,
+          importedAuthor: nameOf(c.author),
           body: c.body,
           increment: c.increment,
           createdAt: at(c.createdAt),
@@ -172,6 +178,5 @@ export async function importTeam(
     revisions: revisionRows.length,
     comments: commentRows.length,
     parameterSets: sets.length,
-    unmatchedPeople: [...new Set(emails.filter((e) => !known.has(e.toLowerCase())))],
   };
 }

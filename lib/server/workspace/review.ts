@@ -102,7 +102,7 @@ export async function changeReview(
   const requesterId = await db.transaction(async (tx) => {
     const moved = await tx
       .update(scenarioRevisions)
-      .set({ reviewState: step.to, reviewBy: ctx.actor.id, reviewAt: now })
+      .set({ reviewState: step.to, reviewBy: ctx.actor.id, reviewAt: now, importedReviewBy: null })
       .where(
         and(
           eq(scenarioRevisions.id, revision.id),

@@ -13,6 +13,7 @@ const node = (id: string, replies: CommentNode[] = []): CommentNode => ({
   parentId: null,
   author: me,
   body: id,
+  importedAuthor: null,
   increment: null,
   createdAt: "2026-01-01T00:00:00.000Z",
   editedAt: null,

@@ -98,6 +98,7 @@ describe("comment threads", () => {
     parentId,
     author: null,
     body: id,
+    importedAuthor: null,
     increment: null,
     createdAt: "",
     editedAt: null,
