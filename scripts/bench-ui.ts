@@ -19,7 +19,8 @@ import { encodeState } from "@/lib/client/workbench/url-state";
 const PORT = Number(process.env.BENCH_PORT ?? 3190);
 const EDITS = 6;
 const CHARTS = 5;
-const PATH = "# 20,000 increments\nrepeat 10 grow 1\n  e11=0.14% in 1000\n  s11=0 in 1000\nend\n";
+const PATH =
+  "# 20,000 increments\nrepeat 10 grow 1\n  ε11=0.14% over 1000\n  σ11=0 over 1000\nend\n";
 const ARGS = [
   "--headless",
   "--no-sandbox",

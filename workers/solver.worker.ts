@@ -27,7 +27,7 @@ const api = {
     legs: Leg[],
   ): { status: RunStatus; scope: string; rows: number } {
     const run = new PathRun(params, legs);
-    sink?.start(runId, run.columns.step.length);
+    sink?.start(runId, run.columns.increment.length);
     const status = runInChunks(run, (chunk) =>
       sink?.chunk(runId, Comlink.transfer(chunk, chunkTransferables(chunk))),
     );

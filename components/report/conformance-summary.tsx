@@ -35,7 +35,7 @@ export function ConformanceSummary({ checks }: { checks: CalibrationReport["chec
                 {c.result.tolerance.damage} on damage
               </td>
               <td>{worst ? `${worst.quantity}: ${Number(worst.maxAbs.toPrecision(3))}` : "—"}</td>
-              <td>{c.passed ? "pass" : `fail from increment ${c.firstFailStep}`}</td>
+              <td>{c.passed ? "pass" : `fail from increment ${c.firstFailIncrement}`}</td>
             </tr>
           );
         })}

@@ -13,20 +13,26 @@ import {
 import type { ChartOverlay } from "@/lib/client/workbench/chart-overlays";
 import type { ResultsStore } from "@/lib/client/workbench/results-store";
 import type { SetEntry } from "@/lib/client/workbench/set-list";
-import { StepCursor } from "./step-cursor";
+import { IncrementCursor } from "./increment-cursor";
 
 export interface ChartGridProps {
   store: ResultsStore;
   entries: SetEntry[];
   scenarioName: string;
-  totalSteps: number;
+  totalIncrements: number;
   overlays?: readonly ChartOverlay[];
 }
 
 const pickCls = "rounded border border-glaze-line bg-white px-1 py-0.5 text-xs";
 
-/** The live charts, every visible set overlaid, one step cursor shared by all. */
-export function ChartGrid({ store, entries, scenarioName, totalSteps, overlays }: ChartGridProps) {
+/** The live charts, every visible set overlaid, one increment cursor shared by all. */
+export function ChartGrid({
+  store,
+  entries,
+  scenarioName,
+  totalIncrements,
+  overlays,
+}: ChartGridProps) {
   const [x, setX] = useState<StrainComponent>("eps11");
   const [y, setY] = useState<StressComponent>("sig11");
   const [cursor, setCursor] = useState<number | null>(null);
@@ -63,7 +69,7 @@ export function ChartGrid({ store, entries, scenarioName, totalSteps, overlays }
   );
   return (
     <div className="space-y-3">
-      <StepCursor value={cursor} max={totalSteps} onChange={setCursor} />
+      <IncrementCursor value={cursor} max={totalIncrements} onChange={setCursor} />
       <div className="grid grid-cols-1 gap-3 xl:grid-cols-2">
         <ResultChart def={ssDef} controls={pickers} overlays={overlays} {...common} />
         {FIXED_CHARTS.map((def) => (
@@ -71,8 +77,8 @@ export function ChartGrid({ store, entries, scenarioName, totalSteps, overlays }
         ))}
       </div>
       <p className="text-xs text-ink-faint">
-        Marks: ○ damage onset, ◆ peak stress, ✕ failure flag. Click a point to move the step cursor.
-        Curves are thinned for display (turning points kept); exports carry every increment.
+        Marks: ○ damage onset, ◆ peak stress, ✕ failure flag. Click a point to move the increment
+        cursor. Curves are thinned for display (turning points kept); exports carry every increment.
       </p>
     </div>
   );

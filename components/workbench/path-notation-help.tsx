@@ -5,14 +5,14 @@ export function PathNotationHelp() {
       <summary className="cursor-pointer font-medium">How to write a path</summary>
       <div className="mt-2 space-y-2 text-ink-soft">
         <p>
-          One leg per line: the targets reached at the end of the leg, then <code>in</code> and the
-          number of increments. Targets move linearly from where the previous leg ended.
+          One leg per line: the targets reached at the end of the leg, then <code>over</code> and
+          the number of increments. Targets move linearly from where the previous leg ended.
         </p>
         <ul className="list-disc space-y-0.5 pl-5">
           <li>
             <code>e11</code>, <code>e22</code>, <code>g12</code> prescribe a strain (mm/mm;{" "}
             <code>g12</code> is the engineering shear strain, 2·e12). A <code>%</code> after the
-            number means per cent: <code>e11=1%</code> is 0.01.
+            number means per cent: <code>ε11=1%</code> is 0.01.
           </li>
           <li>
             <code>s11</code>, <code>s22</code>, <code>s12</code> prescribe a stress in MPa.
@@ -28,18 +28,18 @@ export function PathNotationHelp() {
         </ul>
         <pre className="overflow-x-auto rounded bg-glaze-deep/60 p-2 font-mono text-xs text-ink">
           {`# tension, unload to zero stress, compression
-e11=1% in 100
-s11=0 in 50
-e11=-0.5% in 100
+ε11=1% over 100
+σ11=0 over 50
+ε11=-0.5% over 100
 
 # growing cycles: peaks 0.2 %, 0.4 %, 0.6 %
 repeat 3 grow 1
-  e11=0.2% in 60
-  s11=0 in 60
+  ε11=0.2% over 60
+  σ11=0 over 60
 end
 
 # shear with a constant tension of 20 MPa along 11
-s11=20 g12=1.5% in 200`}
+σ11=20 γ12=1.5% over 200`}
         </pre>
       </div>
     </details>

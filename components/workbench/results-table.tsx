@@ -16,7 +16,7 @@ export interface ResultsTableProps {
 const ROW_H = 24;
 const COL_W = 92;
 const cell = (v: number, name: string) =>
-  name === "step" || name === "leg" || name === "failed"
+  name === "increment" || name === "leg" || name === "failed"
     ? String(v)
     : v === 0
       ? "0"

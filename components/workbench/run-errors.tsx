@@ -22,7 +22,7 @@ export function RunErrors({ store, entries }: RunErrorsProps) {
       out.push({
         id: e.set.id,
         tone: "note",
-        text: `failure flagged (${s.failMode}) at step ${s.stoppedAtStep ?? run!.buffer!.rows - 1}; the path stops there`,
+        text: `failure flagged (${s.failMode}) at increment ${s.stoppedAtIncrement ?? run!.buffer!.rows - 1}; the path stops there`,
       });
     for (const w of s.warnings) out.push({ id: e.set.id, tone: "note", text: w });
     return out;

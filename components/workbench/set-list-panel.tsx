@@ -25,7 +25,8 @@ function statusOf(store: ResultsStore, id: string): string {
   if (run.error) return "error";
   if (run.running) return "computing…";
   const s = run.buffer?.status;
-  if (s?.failed) return `failed: ${s.failMode} at step ${s.stoppedAtStep ?? run.buffer!.rows - 1}`;
+  if (s?.failed)
+    return `failed: ${s.failMode} at increment ${s.stoppedAtIncrement ?? run.buffer!.rows - 1}`;
   return `${(run.buffer?.rows ?? 1) - 1} increments`;
 }
 

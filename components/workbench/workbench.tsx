@@ -63,7 +63,7 @@ export function Workbench({
       dispatch({ type: "sets", action: { type: "update", id: active.set.id, set } }),
     [active.set.id],
   );
-  const totalSteps = legs ? legs.reduce((s, l) => s + l.increments, 0) : 0;
+  const totalIncrements = legs ? legs.reduce((s, l) => s + l.increments, 0) : 0;
 
   const copyLink = async () => {
     const url = `${location.origin}/sandbox#${URL_STATE_KEY}=${encodeState(file)}`;
@@ -166,7 +166,7 @@ export function Workbench({
               store={store}
               entries={m.entries}
               scenarioName={m.name}
-              totalSteps={totalSteps}
+              totalIncrements={totalIncrements}
               overlays={overlays}
             />
           </Panel>

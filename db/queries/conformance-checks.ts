@@ -20,7 +20,7 @@ export async function listConformanceChecksOfRevision(db: Executor, revisionId: 
       setId: conformanceChecks.setId,
       fileName: conformanceChecks.fileName,
       passed: conformanceChecks.passed,
-      firstFailStep: conformanceChecks.firstFailStep,
+      firstFailIncrement: conformanceChecks.firstFailIncrement,
       result: conformanceChecks.result,
       createdAt: conformanceChecks.createdAt,
       author: users.name,

@@ -31,7 +31,7 @@ export const conformanceChecks = pgTable(
     fileName: text("file_name").notNull(),
     fileText: text("file_text").notNull(),
     passed: boolean("passed").notNull(),
-    firstFailStep: integer("first_fail_step"),
+    firstFailIncrement: integer("first_fail_step"),
     result: jsonb("result").$type<ConformanceResult>().notNull(),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),

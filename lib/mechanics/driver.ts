@@ -37,7 +37,12 @@ export class PathRun {
   readonly columns: ResultColumns;
   /** rows written so far (row 0 is the initial state) */
   rows = 0;
-  readonly status: RunStatus = { failed: false, failMode: null, stoppedAtStep: null, warnings: [] };
+  readonly status: RunStatus = {
+    failed: false,
+    failMode: null,
+    stoppedAtIncrement: null,
+    warnings: [],
+  };
   /** true when the path is complete, stopped by a failure, or cancelled */
   done = false;
   readonly totalIncrements: number;
@@ -169,11 +174,11 @@ export class PathRun {
     }
     const last = this.leg >= this.counts.length;
     // A failure that ends the path names its row, even on the path's very last increment:
-    // readers test `stoppedAtStep !== null` to know the path did not run as scripted.
+    // readers test `stoppedAtIncrement !== null` to know the path did not run as scripted.
     const stopped = outcome !== INCREMENT_DONE;
     if (stopped || last) {
       this.done = true;
-      if (stopped) this.status.stoppedAtStep = row;
+      if (stopped) this.status.stoppedAtIncrement = row;
     }
   }
 

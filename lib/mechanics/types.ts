@@ -44,7 +44,7 @@ export interface Leg {
 
 /** Output columns, in the command-line contract's order. */
 export const RESULT_COLUMNS = [
-  "step",
+  "increment",
   "leg",
   "eps11",
   "eps22",
@@ -79,8 +79,8 @@ export interface RunStatus {
   failed: boolean;
   /** 'dcrit axis 1' | 'dcrit axis 2' | 'limit load' | 'no convergence' | null */
   failMode: string | null;
-  /** step index of the row where the path stopped early, else null */
-  stoppedAtStep: number | null;
+  /** increment (row index) of the row where the path stopped early, else null */
+  stoppedAtIncrement: number | null;
   /** non-fatal notes, e.g. 'compression strength exceeded' */
   warnings: string[];
 }

@@ -1,6 +1,6 @@
 /**
  * CSV form of a run's result columns (scenario-file.md, command-line driver): a header with the
- * contract's column names, then one line per stored step, numbers in shortest round-trip form.
+ * contract's column names, then one line per stored increment, numbers in shortest round-trip form.
  */
 import { RESULT_COLUMNS, type ResultColumns } from "@/lib/mechanics/types";
 
@@ -20,7 +20,7 @@ export function* resultsCsvChunks(
   const arrays = RESULT_COLUMNS.map((name) => columns[name]);
   const width = arrays.length;
   let chunk = CSV_HEADER + "\n";
-  // String(x) is the shortest round-trip form and writes -0 as "0"; step, leg and failed are
+  // String(x) is the shortest round-trip form and writes -0 as "0"; increment, leg and failed are
   // stored as whole numbers, so they print without a decimal point.
   for (let r = 0; r < rows; r++) {
     let line = String(arrays[0][r]);

@@ -1,6 +1,6 @@
 /**
  * JSON form of a run (scenario-file.md): `{ set, columns: { <name>: [...] }, status }` with the
- * contract's column names and status fields (failed, failMode, stoppedAtStep).
+ * contract's column names and status fields (failed, failMode, stoppedAtIncrement).
  */
 import { RESULT_COLUMNS, type ResultColumns, type RunStatus } from "@/lib/mechanics/types";
 
@@ -31,8 +31,8 @@ export function* resultsJsonChunks(
     }
     chunk += "]";
   }
-  const { failed, failMode, stoppedAtStep } = status;
-  chunk += `},"status":${JSON.stringify({ failed, failMode, stoppedAtStep })}}\n`;
+  const { failed, failMode, stoppedAtIncrement } = status;
+  chunk += `},"status":${JSON.stringify({ failed, failMode, stoppedAtIncrement })}}\n`;
   yield chunk;
 }
 

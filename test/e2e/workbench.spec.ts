@@ -214,12 +214,12 @@ describe("sandbox workbench", () => {
 
   it("reports a path text error at line and column, and recovers", async () => {
     const box = page.getByLabel("Path in text form");
-    await box.fill("e11=1% in 100\ns11=0 in 5O");
+    await box.fill("ε11=1% over 100\nσ11=0 over 5O");
     await expect
       .poll(() => page.locator("#path-errors").textContent())
-      .toContain("line 2, column 11");
+      .toContain("line 2, column 13");
     const n = await eventCount(page);
-    await box.fill("e11=1% in 100\ns11=0 in 50");
+    await box.fill("ε11=1% over 100\nσ11=0 over 50");
     await settled(page, n);
   });
 

@@ -1,6 +1,6 @@
 /**
  * What each chart of the workbench plots: columns, names, units. Strain mm/mm, stress and
- * energy density MPa, damage dimensionless, x "increment" = the step column.
+ * energy density MPa, damage dimensionless, x "increment" = the increment column.
  */
 import type { ResultColumn } from "@/lib/mechanics/types";
 
@@ -51,9 +51,14 @@ export function stressStrainDef(x: StrainComponent, y: StressComponent): ChartDe
   };
 }
 
-const step = (key: string, y: ResultColumn, name: string, dash: SeriesDef["dash"]): SeriesDef => ({
+const overIncrements = (
+  key: string,
+  y: ResultColumn,
+  name: string,
+  dash: SeriesDef["dash"],
+): SeriesDef => ({
   key,
-  x: "step",
+  x: "increment",
   y,
   name,
   dash,
@@ -67,7 +72,7 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
     yTitle: "damage (–)",
     xUnit: "",
     yUnit: "",
-    series: [step("d1", "d1", "d1", "solid"), step("d2", "d2", "d2", "dash")],
+    series: [overIncrements("d1", "d1", "d1", "solid"), overIncrements("d2", "d2", "d2", "dash")],
     marks: true,
   },
   {
@@ -91,9 +96,9 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
     xUnit: "",
     yUnit: "mm/mm",
     series: [
-      step("p11", "epsP11", "εp11", "solid"),
-      step("p22", "epsP22", "εp22", "dash"),
-      step("p12", "gamP12", "γp12", "dot"),
+      overIncrements("p11", "epsP11", "εp11", "solid"),
+      overIncrements("p22", "epsP22", "εp22", "dash"),
+      overIncrements("p12", "gamP12", "γp12", "dot"),
     ],
     marks: false,
   },
@@ -105,9 +110,9 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
     xUnit: "",
     yUnit: "MPa",
     series: [
-      step("W", "W", "W work in", "solid"),
-      step("psi", "psi", "ψ stored", "dash"),
-      step("Phi", "Phi", "Φ dissipated", "dot"),
+      overIncrements("W", "W", "W work in", "solid"),
+      overIncrements("psi", "psi", "ψ stored", "dash"),
+      overIncrements("Phi", "Phi", "Φ dissipated", "dot"),
     ],
     marks: false,
   },

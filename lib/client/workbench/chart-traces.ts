@@ -1,6 +1,6 @@
 /**
  * Plotly traces of one chart for every visible set: decimated curves (the full rows stay in the
- * buffers for export), onset / peak / failure marks and the shared step cursor.
+ * buffers for export), onset / peak / failure marks and the shared increment cursor.
  */
 import type { ResultColumns } from "@/lib/mechanics/types";
 import type { ChartDef } from "./chart-defs";
@@ -33,7 +33,7 @@ export interface ChartTrace {
   hovertemplate: string;
 }
 
-/** Row indices behind each trace's points, for mapping a click back to a step. */
+/** Row indices behind each trace's points, for mapping a click back to an increment. */
 export interface BuiltChart {
   traces: ChartTrace[];
   rowsOf: Int32Array[];
@@ -87,7 +87,7 @@ export function buildChart(
     }
     if (cursor !== null && cursor < src.rows) {
       extra.rows.push(cursor);
-      extra.names.push(`step ${cursor}`);
+      extra.names.push(`increment ${cursor}`);
       extra.symbols.push("circle");
     }
     if (extra.rows.length === 0) continue;

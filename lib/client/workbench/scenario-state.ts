@@ -5,6 +5,7 @@
  */
 import { formatPathText } from "@/lib/scenario/path-text/format-path-text";
 import { expandPathDoc, type PathDoc } from "@/lib/scenario/path-text/path-doc";
+import { pathTextInCurrentWords } from "@/lib/scenario/path-text/convert-version1";
 import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
 import type { PlacedGenerator } from "@/lib/scenario/cycle-generator";
 import { type Scenario, SCENARIO_FORMAT } from "@/lib/scenario/scenario-schema";
@@ -63,10 +64,11 @@ export function fromScenario(scenario: Scenario, raw: unknown = scenario): Workb
     : [];
   let pathText: string | null = null;
   if (typeof extras?.pathText === "string") {
-    const parsed = parsePathText(extras.pathText);
+    // Texts of earlier revisions (e11=1% in 100) open in the current words (ε11=1% over 100).
+    const text = pathTextInCurrentWords(extras.pathText);
+    const parsed = parsePathText(text);
     // Keep the author's text only if it still says exactly what the legs say.
-    if (parsed.ok && sameLegs(expandPathDoc(parsed.doc), scenario.path.legs))
-      pathText = extras.pathText;
+    if (parsed.ok && sameLegs(expandPathDoc(parsed.doc), scenario.path.legs)) pathText = text;
   }
   pathText ??= formatPathText({ items: scenario.path.legs.map((leg) => ({ kind: "leg", leg })) });
   return {

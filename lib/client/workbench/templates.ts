@@ -9,36 +9,36 @@ export const PATH_TEMPLATES: readonly PathTemplate[] = [
   {
     key: "uniaxial-tension",
     name: "Uniaxial tension",
-    text: "# strain 11 to 2 %, the other directions free\ne11=2% in 200\n",
+    text: "# strain 11 to 2 %, the other directions free\nε11=2% over 200\n",
   },
   {
     key: "tension-unload-compression",
     name: "Tension → unload → compression",
-    text: "e11=1% in 100\ns11=0 in 50     # unload to zero stress\ne11=-0.5% in 100\n",
+    text: "ε11=1% over 100\nσ11=0 over 50     # unload to zero stress\nε11=-0.5% over 100\n",
   },
   {
     key: "growing-cycles",
     name: "Growing-amplitude cycles",
     text:
       "# peaks at 0.2 %, 0.4 %, … 1.4 %, unloading to zero stress each time\n" +
-      "repeat 7 grow 1\n  e11=0.2% in 60\n  s11=0 in 60\nend\n",
+      "repeat 7 grow 1\n  ε11=0.2% over 60\n  σ11=0 over 60\nend\n",
   },
   {
     key: "shear-reversal",
     name: "Shear reversal",
-    text: "g12=1.5% in 100\ng12=-1.5% in 200\ns12=0 in 100\n",
+    text: "γ12=1.5% over 100\nγ12=-1.5% over 200\nσ12=0 over 100\n",
   },
   {
     key: "equibiaxial",
     name: "Equibiaxial tension",
-    text: "e11=0.8% e22=0.8% in 200\n",
+    text: "ε11=0.8% ε22=0.8% over 200\n",
   },
   {
     key: "off-axis-tension",
     name: "Off-axis tension (30°)",
     text:
-      "# uniaxial stress of 60 MPa at 30° from axis 1: s = 60·(cos², sin², sin·cos)\n" +
-      "s11=45 s22=15 s12=25.98076 in 200\n",
+      "# uniaxial stress of 60 MPa at 30° from axis 1: σ = 60·(cos², sin², sin·cos)\n" +
+      "σ11=45 σ22=15 σ12=25.98076 over 200\n",
   },
 ];
 

@@ -3,7 +3,7 @@
  * Directions held at zero stress are left out (that is the notation's default).
  */
 import type { Leg } from "@/lib/mechanics/types";
-import { componentName } from "./components";
+import { componentName, INCREMENTS_WORD } from "./components";
 import type { PathDoc } from "./path-doc";
 
 /** Shortest exact form of a number (round-trips through the parser). */
@@ -17,8 +17,8 @@ export function formatLeg(leg: Leg): string {
     const free = leg.control[i] === "stress" && leg.target[i] === 0;
     if (!free) terms.push(`${componentName(i, leg.control[i])}=${num(leg.target[i])}`);
   }
-  if (terms.length === 0) terms.push("s11=0");
-  return `${terms.join(" ")} in ${leg.increments}`;
+  if (terms.length === 0) terms.push(`${componentName(0, "stress")}=0`);
+  return `${terms.join(" ")} ${INCREMENTS_WORD} ${leg.increments}`;
 }
 
 export function formatPathText(doc: PathDoc): string {

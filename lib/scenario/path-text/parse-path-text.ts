@@ -2,17 +2,23 @@
  * Parser of the path notation (documented on the sandbox page):
  *
  *   # a note
- *   e11=1% in 100              one leg: strain 11 to 1 %, free directions held at zero stress
- *   s11=0 in 50                unload to zero stress
+ *   ε11=1% over 100            one leg: strain 11 to 1 %, free directions held at zero stress
+ *   σ11=0 over 50              unload to zero stress (ASCII: stress11=0 over 50)
  *   repeat 5 grow 0.5          a block run 5 times, cycle k scaled by (1 + 0.5·k)
- *     e11=0.4% in 60
- *     s11=0 in 60
+ *     ε11=0.4% over 60
+ *     σ11=0 over 60
  *   end
  *
- * Errors carry 1-based line and column.
+ * Component names: see components.ts (symbols, ASCII words, and version 1's e11/s11 with "in",
+ * still read). Errors carry 1-based line and column.
  */
 import type { Leg } from "@/lib/mechanics/types";
-import { COMPONENT_NAMES, componentHint } from "./components";
+import {
+  COMPONENT_NAMES,
+  componentHint,
+  INCREMENTS_WORD,
+  VERSION1_INCREMENTS_WORD,
+} from "./components";
 import { MAX_PATH_INCREMENTS, type PathDoc, type PathItem, totalIncrements } from "./path-doc";
 import { type Token, tokenizeLine } from "./tokenize";
 
@@ -46,13 +52,16 @@ function readInteger(tok: Token | undefined, endColumn: number, what: string, ma
   return n;
 }
 
-/** Parses "e11=0.01 s22=0 in 100" (commas between terms allowed). */
+const isIncrementsWord = (t: Token) =>
+  t.kind === "word" && (t.text === INCREMENTS_WORD || t.text === VERSION1_INCREMENTS_WORD);
+
+/** Parses "ε11=0.01 σ22=0 over 100" (commas between terms allowed). */
 function parseLeg(tokens: Token[], endColumn: number): Leg {
   const control: Leg["control"] = ["stress", "stress", "stress"];
   const target: Leg["target"] = [0, 0, 0];
   const seen: (number | null)[] = [null, null, null];
   let i = 0;
-  while (i < tokens.length && !(tokens[i].kind === "word" && tokens[i].text === "in")) {
+  while (i < tokens.length && !isIncrementsWord(tokens[i])) {
     const t = tokens[i];
     if (t.kind === "symbol" && t.text === ",") {
       i++;
@@ -92,10 +101,10 @@ function parseLeg(tokens: Token[], endColumn: number): Leg {
   if (seen.every((s) => s === null))
     throw new LineError(
       tokens[0]?.column ?? endColumn,
-      "a leg needs at least one target, e.g. e11=1% in 100",
+      "a leg needs at least one target, e.g. ε11=1% over 100",
     );
   if (i >= tokens.length)
-    throw new LineError(endColumn, 'expected "in <increments>" at the end of the leg');
+    throw new LineError(endColumn, 'expected "over <increments>" at the end of the leg');
   const increments = readInteger(
     tokens[i + 1],
     endColumn,
@@ -187,7 +196,7 @@ export function parsePathText(text: string): ParsePathResult {
     errors.push({
       line: 1,
       column: 1,
-      message: "the path is empty: write at least one leg, e.g. e11=1% in 100",
+      message: "the path is empty: write at least one leg, e.g. ε11=1% over 100",
     });
   if (errors.length > 0) return { ok: false, errors };
   const doc = { items };

@@ -1,6 +1,6 @@
 /**
  * Splits one line of the path notation into tokens with their 1-based column.
- * Comments start with "#" and run to the end of the line.
+ * Comments start with "#" and run to the end of the line. Words may hold Greek letters (σ11).
  */
 export type TokenKind = "word" | "number" | "symbol";
 
@@ -11,7 +11,7 @@ export interface Token {
 }
 
 const PATTERN =
-  /(\s+)|(#.*$)|([A-Za-z_][A-Za-z0-9_]*)|([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)|([=,%])|(.)/g;
+  /(\s+)|(#.*$)|([A-Za-z_\u0370-\u03ff][A-Za-z0-9_\u0370-\u03ff]*)|([-+]?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?)|([=,%])|(.)/g;
 
 export interface TokenizeResult {
   tokens: Token[];

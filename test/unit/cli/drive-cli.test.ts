@@ -32,7 +32,7 @@ function fileWith(name: string, json: unknown): string {
 }
 
 describe("drive (spawned)", () => {
-  it("prints the contract's header and one row per increment plus step 0 for the demo file", () => {
+  it("prints the contract's header and one row per increment plus increment 0 for the demo file", () => {
     const { code, stdout, stderr } = drive(DEMO);
     expect(stderr).toBe("");
     expect(code).toBe(0);
@@ -40,11 +40,13 @@ describe("drive (spawned)", () => {
     expect(lines.pop()).toBe(""); // every line ends with \n
     expect(lines[0]).toBe(RESULT_COLUMNS.join(","));
     expect(lines).toHaveLength(1 + 1 + 100 + 50 + 100);
-    const row = (step: number) =>
-      Object.fromEntries(lines[1 + step].split(",").map((v, i) => [RESULT_COLUMNS[i], Number(v)]));
-    expect(row(0)).toMatchObject({ step: 0, leg: 0, sig11: 0, failed: 0 });
+    const row = (increment: number) =>
+      Object.fromEntries(
+        lines[1 + increment].split(",").map((v, i) => [RESULT_COLUMNS[i], Number(v)]),
+      );
+    expect(row(0)).toMatchObject({ increment: 0, leg: 0, sig11: 0, failed: 0 });
     // spec D.4 table, closed form: ε11 = 0.010 → d1 = 0.2542425, σ11 = 71.60515 (7 digits).
-    expect(row(100)).toMatchObject({ step: 100, leg: 1, eps11: 0.01 });
+    expect(row(100)).toMatchObject({ increment: 100, leg: 1, eps11: 0.01 });
     expect(row(100).d1).toBeCloseTo(0.2542425, 6);
     expect(row(100).sig11).toBeCloseTo(71.60515, 4);
     // spec D.5: unloaded to σ = 0, ε11 = alpha·d1 = 0.001271212.
@@ -66,10 +68,10 @@ describe("drive (spawned)", () => {
     const parsed = JSON.parse(stdout);
     expect(parsed.set).toBe("soft");
     expect(Object.keys(parsed.columns)).toEqual([...RESULT_COLUMNS]);
-    expect(parsed.columns.step).toHaveLength(251);
+    expect(parsed.columns.increment).toHaveLength(251);
     // first increment is elastic: σ11 = E1·ε11 with ε11 = 0.01/100 (uniaxial, spec C.3).
     expect(parsed.columns.sig11[1]).toBeCloseTo(8000 * 1e-4, 10);
-    expect(parsed.status).toEqual({ failed: false, failMode: null, stoppedAtStep: null });
+    expect(parsed.status).toEqual({ failed: false, failMode: null, stoppedAtIncrement: null });
   });
 
   it("ends a failing point with failed = 1 and exit 0 (dcrit, onFailure stop)", () => {
@@ -84,8 +86,8 @@ describe("drive (spawned)", () => {
     const { columns, status } = JSON.parse(stdout);
     expect(status.failed).toBe(true);
     expect(status.failMode).toBe("dcrit axis 1");
-    const last = columns.step.length - 1;
-    expect(status.stoppedAtStep).toBe(last);
+    const last = columns.increment.length - 1;
+    expect(status.stoppedAtIncrement).toBe(last);
     expect(columns.failed[last]).toBe(1);
     expect(columns.eps11[last]).toBeGreaterThanOrEqual(0.01537811);
     expect(columns.eps11[last - 1]).toBeLessThan(0.01537811);
@@ -104,8 +106,12 @@ describe("drive (spawned)", () => {
     const { code, stdout } = drive(fileWith("continue.json", pull), "--format", "json");
     expect(code).toBe(0);
     const { columns, status } = JSON.parse(stdout);
-    expect(columns.step).toHaveLength(251);
-    expect(status).toMatchObject({ failed: true, failMode: "dcrit axis 1", stoppedAtStep: null });
+    expect(columns.increment).toHaveLength(251);
+    expect(status).toMatchObject({
+      failed: true,
+      failMode: "dcrit axis 1",
+      stoppedAtIncrement: null,
+    });
     const first = columns.failed.indexOf(1);
     expect(first).toBeGreaterThan(0);
     expect(columns.failed.slice(first).every((f: number) => f === 1)).toBe(true);

@@ -8,7 +8,12 @@ import { RESULT_COLUMNS, type ResultColumns, type RunStatus } from "@/lib/mechan
 import { runDriveCommand, type PathRunner } from "@/lib/scenario/drive-command";
 import { DEMO_REQUIRED, demoFile } from "../scenario/fixtures";
 
-const OK_STATUS: RunStatus = { failed: false, failMode: null, stoppedAtStep: null, warnings: [] };
+const OK_STATUS: RunStatus = {
+  failed: false,
+  failMode: null,
+  stoppedAtIncrement: null,
+  warnings: [],
+};
 
 /** A core stand-in: one row per increment plus row 0, sig11 = E1 so the chosen set shows. */
 function fakeRunner(status: RunStatus = OK_STATUS): PathRunner & { calls: unknown[] } {
@@ -19,7 +24,7 @@ function fakeRunner(status: RunStatus = OK_STATUS): PathRunner & { calls: unknow
     const columns = {} as ResultColumns;
     for (const name of RESULT_COLUMNS) columns[name] = new Float64Array(rows);
     columns.sig11.fill(params.E1);
-    columns.step.forEach((_, i) => (columns.step[i] = i));
+    columns.increment.forEach((_, i) => (columns.increment[i] = i));
     return { rows, columns, status };
   }) as PathRunner & { calls: unknown[] };
   run.calls = calls;
@@ -81,7 +86,7 @@ describe("runDriveCommand", () => {
     const failed: RunStatus = {
       failed: true,
       failMode: "limit load",
-      stoppedAtStep: 3,
+      stoppedAtIncrement: 3,
       warnings: [],
     };
     const { code, stdout, stderr } = drive(
@@ -94,7 +99,7 @@ describe("runDriveCommand", () => {
     expect(JSON.parse(stdout).status).toEqual({
       failed: true,
       failMode: "limit load",
-      stoppedAtStep: 3,
+      stoppedAtIncrement: 3,
     });
   });
 

@@ -16,7 +16,7 @@ describe("closure kink under stress control with one family loading (C.5)", () =
     const r = run({}, [leg([E, S, S], [0.01, 0, 0], 100), leg([S, S, S], [-10, 60, 0], 120)]);
     const c = r.columns;
     expect(r.status.failed).toBe(false);
-    expect(r.status.stoppedAtStep).toBeNull();
+    expect(r.status.stoppedAtIncrement).toBeNull();
     expect(r.rows).toBe(221);
     const s0 = c.sig11[100];
     let crossedWhileLoading = false;

@@ -47,7 +47,7 @@ describe("tangent after a break (C.6 with the broken family neither evolving nor
     ]);
     while (!run.done) run.advance(1000);
     expect(run.status.failMode).toBe("dcrit axis 1");
-    expect(run.status.stoppedAtStep).toBeNull();
+    expect(run.status.stoppedAtIncrement).toBeNull();
     const st = run.currentState();
     expect(st[BROKEN]).toBe(1);
     const eps = [st[10], st[11] + 0.0003, st[12] + 0.0001];

@@ -98,7 +98,7 @@ describe("D.4 monotonic uniaxial tension [e,s,s], closed form", () => {
     expect(rf.status.failed).toBe(true);
     expect(rf.status.failMode).toBe("dcrit axis 1");
     const n = last(rf);
-    expect(rf.status.stoppedAtStep).toBe(n);
+    expect(rf.status.stoppedAtIncrement).toBe(n);
     expect(rf.columns.failed[n]).toBe(1);
     expect(rf.columns.failed[n - 1]).toBe(0);
     expect(rf.columns.d1[n]).toBeGreaterThanOrEqual(0.45);
@@ -114,7 +114,7 @@ describe("D.4 monotonic uniaxial tension [e,s,s], closed form", () => {
     expect(rl.status.failMode).toBe("limit load");
     const n = last(rl);
     expect(rl.columns.failed[n]).toBe(1);
-    expect(rl.status.stoppedAtStep).toBe(n);
+    expect(rl.status.stoppedAtIncrement).toBe(n);
     // the failing row is the last converged sub-step: below the peak stress, below d_peak
     expect(rl.columns.sig11[n]).toBeLessThanOrEqual(U.sigMax * (1 + 1e-9));
     expect(rl.columns.sig11[n]).toBeGreaterThan(U.sigMax - 85 / 100);

@@ -9,7 +9,7 @@ describe("D.20 failure inside a sub-stepped increment ('stop')", () => {
     expect(r.rows).toBe(2);
     expect(r.status.failed).toBe(true);
     expect(r.status.failMode).toBe("dcrit axis 1");
-    expect(r.status.stoppedAtStep).toBe(1);
+    expect(r.status.stoppedAtIncrement).toBe(1);
     expect(c.failed[1]).toBe(1);
     expect(c.d1[1]).toBeGreaterThanOrEqual(DEMO.dcrit);
     expect(c.d1[1]).toBeLessThanOrEqual(DEMO.dcrit + 0.05);
@@ -35,7 +35,7 @@ describe("D.20 failure inside a sub-stepped increment ('stop')", () => {
     ]);
     expect(r.status.failed).toBe(true);
     expect(r.status.failMode).toBe("dcrit axis 1");
-    expect(r.status.stoppedAtStep).toBe(last(r));
+    expect(r.status.stoppedAtIncrement).toBe(last(r));
     expect(last(r)).toBeLessThan(55);
     expect(r.columns.sig22[last(r)]).toBeLessThan(79.49721); // D.4 sigma_max
   });
@@ -51,7 +51,7 @@ describe("D.20 the break with onFailure 'continue' (spec C.7)", () => {
     const r = run({ onFailure: "continue" }, legs);
     const c = r.columns;
     expect(r.status.failMode).toBe("dcrit axis 1");
-    expect(r.status.stoppedAtStep).toBeNull();
+    expect(r.status.stoppedAtIncrement).toBeNull();
     expect(r.rows).toBe(102);
     // the 'stop' run gives the sub-step that reached dcrit: its dp1 must survive the break
     const stop = run({}, [legs[0]]);

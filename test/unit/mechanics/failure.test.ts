@@ -15,9 +15,9 @@ describe("limit load under stress control (spec C.7)", () => {
   it("beyond the peak: rows stop at the failing increment, which shows the last converged sub-step", () => {
     const r = run({}, [leg([S, S, S], [60, 0, 0], 10), leg([S, S, S], [90, 0, 0], 30)]);
     const n = last(r);
-    expect(r.status).toMatchObject({ failed: true, failMode: "limit load", stoppedAtStep: n });
+    expect(r.status).toMatchObject({ failed: true, failMode: "limit load", stoppedAtIncrement: n });
     // steps count user increments without gaps; leg is 1-based
-    for (let i = 0; i <= n; i++) expect(r.columns.step[i]).toBe(i);
+    for (let i = 0; i <= n; i++) expect(r.columns.increment[i]).toBe(i);
     expect(r.columns.leg[0]).toBe(0);
     expect(r.columns.leg[5]).toBe(1);
     expect(r.columns.leg[n]).toBe(2);
@@ -44,7 +44,11 @@ describe("no convergence under full strain control (spec C.7)", () => {
     const r = run({}, [leg([E, E, E], [0.001, 0, 0], 2), leg([E, E, E], [10, 0, 0], 1)]);
     const n = last(r);
     expect(n).toBe(3);
-    expect(r.status).toMatchObject({ failed: true, failMode: "no convergence", stoppedAtStep: 3 });
+    expect(r.status).toMatchObject({
+      failed: true,
+      failMode: "no convergence",
+      stoppedAtIncrement: 3,
+    });
     expect(r.columns.failed[n]).toBe(1);
     expect(r.columns.failed[n - 1]).toBe(0);
     // the row is a converged sub-step on the 2^-12 grid of the increment, short of the target
@@ -59,7 +63,7 @@ describe("dcrit and onFailure (spec B.6, C.7)", () => {
     const r = run({}, [leg([E, S, S], [0.02, 0, 0], 200), leg([E, S, S], [0, 0, 0], 10)]);
     const n = last(r);
     expect(r.status.failMode).toBe("dcrit axis 1");
-    expect(r.status.stoppedAtStep).toBe(n);
+    expect(r.status.stoppedAtIncrement).toBe(n);
     expect(r.columns.d1[n]).toBeGreaterThanOrEqual(DEMO.dcrit);
     expect(r.columns.d1[n]).toBeLessThan(DEMO.dmax);
     expect(n).toBeLessThan(200);
@@ -79,7 +83,7 @@ describe("dcrit and onFailure (spec B.6, C.7)", () => {
     expect(n).toBe(300);
     expect(r.status.failed).toBe(true);
     expect(r.status.failMode).toBe("dcrit axis 1");
-    expect(r.status.stoppedAtStep).toBeNull();
+    expect(r.status.stoppedAtIncrement).toBeNull();
     const k = Array.from(c.failed).indexOf(1);
     expect(k).toBeGreaterThan(0);
     expect(c.d1[k - 1]).toBeLessThan(DEMO.dcrit);

@@ -4,7 +4,7 @@ import { RESULT_COLUMNS, type ResultColumns, type RunStatus } from "@/lib/mechan
 import { resultsCsvChunks, resultsToCsv, resultsToJson } from "@/lib/scenario/results-csv";
 
 const CONTRACT_HEADER =
-  "step,leg,eps11,eps22,gam12,sig11,sig22,sig12,d1,d2,dp1,dp2,epsP11,epsP22,gamP12,Y1,Y2,Ybar1,Ybar2,psi,W,Phi,thetaD,failed";
+  "increment,leg,eps11,eps22,gam12,sig11,sig22,sig12,d1,d2,dp1,dp2,epsP11,epsP22,gamP12,Y1,Y2,Ybar1,Ybar2,psi,W,Phi,thetaD,failed";
 
 /** Columns with `capacity` rows where cell (r, c) = r + c/100, except the values set by `edit`. */
 function columnsWith(capacity: number, edit?: (cols: ResultColumns) => void): ResultColumns {
@@ -19,7 +19,7 @@ function columnsWith(capacity: number, edit?: (cols: ResultColumns) => void): Re
 const STATUS: RunStatus = {
   failed: true,
   failMode: "dcrit axis 1",
-  stoppedAtStep: 2,
+  stoppedAtIncrement: 2,
   warnings: ["x"],
 };
 
@@ -40,7 +40,7 @@ describe("resultsToCsv", () => {
 
   it("writes shortest round-trip numbers, -0 as 0, integers without a point", () => {
     const cols = columnsWith(1, (c) => {
-      c.step[0] = 7;
+      c.increment[0] = 7;
       c.eps11[0] = 0.1 + 0.2; // 0.30000000000000004 must survive
       c.sig11[0] = -0;
       c.d1[0] = 1e-21;
@@ -72,13 +72,17 @@ describe("resultsToJson", () => {
     expect(Object.keys(parsed.columns)).toEqual([...RESULT_COLUMNS]);
     expect(parsed.columns.eps11).toEqual([0.02, 1.02]);
     expect(Object.is(parsed.columns.sig22[1], 0)).toBe(true);
-    expect(parsed.status).toEqual({ failed: true, failMode: "dcrit axis 1", stoppedAtStep: 2 });
+    expect(parsed.status).toEqual({
+      failed: true,
+      failMode: "dcrit axis 1",
+      stoppedAtIncrement: 2,
+    });
   });
 
   it("writes null status fields for a run that did not fail, and empty columns for no rows", () => {
-    const ok: RunStatus = { failed: false, failMode: null, stoppedAtStep: null, warnings: [] };
+    const ok: RunStatus = { failed: false, failMode: null, stoppedAtIncrement: null, warnings: [] };
     const parsed = JSON.parse(resultsToJson("B", columnsWith(0), 0, ok));
-    expect(parsed.status).toEqual({ failed: false, failMode: null, stoppedAtStep: null });
-    expect(parsed.columns.step).toEqual([]);
+    expect(parsed.status).toEqual({ failed: false, failMode: null, stoppedAtIncrement: null });
+    expect(parsed.columns.increment).toEqual([]);
   });
 });

@@ -45,7 +45,7 @@ export function bundleNote(id: BundleIdentity, cases: Map<string, LoadCase[]>): 
     "",
     "COLUMNS (one row per increment; row 0 is the initial state)",
     RESULT_COLUMNS.join(","),
-    "step: increment number from 0; leg: 1-based leg (0 on row 0)",
+    "increment: increment number from 0; leg: 1-based leg (0 on row 0)",
     "eps11, eps22, gam12: load-frame strains in mm/mm, gam12 the engineering shear strain (2*eps12)",
     "sig11, sig22, sig12: load-frame stresses in MPa",
     "d1, d2: damage variables; dp1, dp2: their permanent-strain drivers",

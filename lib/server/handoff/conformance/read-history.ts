@@ -23,22 +23,32 @@ export type History = Partial<Record<HistoryChannel, Float64Array>> & {
   lines: Int32Array;
 };
 
-const NAMES: Record<HistoryChannel, RegExp> = {
-  increment: /^(increment|inc|step|frame)$/,
-  eps11: /^(eps11|e11|strain11|eps_11|le11)$/,
-  eps22: /^(eps22|e22|strain22|eps_22|le22)$/,
-  gam12: /^(gam12|gamma12|g12|2\*?e12|eps12_eng)$/,
-  sig11: /^(sig11|s11|stress11|sigma11|sig_11)$/,
-  sig22: /^(sig22|s22|stress22|sigma22|sig_22)$/,
-  sig12: /^(sig12|s12|stress12|sigma12|tau12|sig_12)$/,
-  d1: /^(d1|damage1|d_1)$/,
-  d2: /^(d2|damage2|d_2)$/,
+/**
+ * Header names found without the user's help: the contract's own columns, the symbols the product
+ * shows and plain words, compared without case, spaces, "_" or "-" and without a trailing unit.
+ * `step` is our own version-1 name of the increment column. Anything else is mapped by the user.
+ */
+export const HISTORY_HEADER_ALIASES: Readonly<Record<HistoryChannel, readonly string[]>> = {
+  increment: ["increment", "step"],
+  eps11: ["eps11", "ε11", "strain11"],
+  eps22: ["eps22", "ε22", "strain22"],
+  gam12: ["gam12", "γ12", "shear12", "shearstrain12", "gamma12"],
+  sig11: ["sig11", "σ11", "stress11", "sigma11"],
+  sig22: ["sig22", "σ22", "stress22", "sigma22"],
+  sig12: ["sig12", "σ12", "τ12", "stress12", "shearstress12", "sigma12", "tau12"],
+  d1: ["d1", "damage1"],
+  d2: ["d2", "damage2"],
 };
+
+/** A header as compared with the aliases: no unit, no case, no spaces, "_" or "-". */
+export function headerKey(header: string): string {
+  return headerName(header).replace(/[\s_-]+/g, "");
+}
 
 export function suggestHistoryMapping(headers: string[]): HistoryMapping {
   const mapping: HistoryMapping = {};
   for (const channel of HISTORY_CHANNELS) {
-    const index = headers.findIndex((h) => NAMES[channel].test(headerName(h)));
+    const index = headers.findIndex((h) => HISTORY_HEADER_ALIASES[channel].includes(headerKey(h)));
     if (index >= 0) mapping[channel] = index;
   }
   return mapping;
@@ -57,7 +67,7 @@ export function readHistory(text: string, chosen?: HistoryMapping): HistoryResul
       ok: false,
       error: csvError(
         "mapping",
-        `no column for ${missing.join(", ")}; name the headers eps11, eps22, gam12, sig11, sig22, sig12 (d1, d2 and increment optional) or map them.`,
+        `no column for ${missing.join(", ")}; name the headers eps11, eps22, gam12, sig11, sig22, sig12 (or strain11, strain22, shear12, stress11, stress22, stress12; increment, d1 and d2 optional) or map them.`,
       ),
     };
   }

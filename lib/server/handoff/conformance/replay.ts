@@ -3,7 +3,7 @@ import "server-only";
 /**
  * Replays a history's strains through the driver: one strain-controlled leg per row, one
  * increment each, so Craquelure answers at exactly the uploaded strain states. A first row at
- * zero strain is taken as the initial state (the driver's step 0).
+ * zero strain is taken as the initial state (the driver's increment 0).
  */
 import { runPath } from "@/lib/mechanics/driver";
 import type { Leg, MaterialParams, ResultColumns } from "@/lib/mechanics/types";
@@ -40,5 +40,5 @@ export function replayHistory(params: MaterialParams, history: History): Replay 
     const row = startsAtZero ? i : i + 1;
     rowOf[i] = row < result.rows ? row : -1;
   }
-  return { columns: result.columns, rowOf, stoppedAtRow: result.status.stoppedAtStep };
+  return { columns: result.columns, rowOf, stoppedAtRow: result.status.stoppedAtIncrement };
 }

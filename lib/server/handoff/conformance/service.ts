@@ -41,7 +41,7 @@ export async function createConformanceCheck(
     fileName: data.fileName,
     fileText: data.text,
     passed: result.passed,
-    firstFailStep: result.firstFailIncrement,
+    firstFailIncrement: result.firstFailIncrement,
     result: { ...result, mapping: data.mapping },
     createdBy: ctx.actor.id,
   });
@@ -52,7 +52,7 @@ export async function createConformanceCheck(
     target: row.id,
     detail: { revision: revision.number, passed: result.passed, fileName: data.fileName },
   });
-  return { id: row.id, passed: row.passed, firstFailIncrement: row.firstFailStep, result };
+  return { id: row.id, passed: row.passed, firstFailIncrement: row.firstFailIncrement, result };
 }
 
 export async function listConformanceChecks(db: Executor, actor: Actor, ref: RevisionRef) {

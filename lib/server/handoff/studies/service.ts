@@ -14,6 +14,7 @@ import {
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { CAUTION_LINES } from "@/lib/shared/caution";
+import { runStatusOnRead } from "@/lib/scenario/version1-names";
 import { safeName } from "@/lib/server/handoff/bundle/build";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { notFound, requireUuid } from "@/lib/server/workspace/errors";
@@ -65,7 +66,10 @@ async function studyOf(db: Executor, teamId: string, studyId: unknown) {
 export async function getStudy(db: Executor, actor: Actor, teamSlug: string, studyId: unknown) {
   const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
   const study = await studyOf(db, ctx.team.id, studyId);
-  const items = await listStudyItems(db, study.id);
+  const items = (await listStudyItems(db, study.id)).map((i) => ({
+    ...i,
+    status: runStatusOnRead(i.status),
+  }));
   const done = items.filter((i) => i.state === "done").length;
   const failed = items.filter((i) => i.state === "failed").length;
   const state =
@@ -100,8 +104,9 @@ export async function studyResultsZip(
   const study = await studyOf(db, ctx.team.id, studyId);
   const rows = await listStudyResults(db, study.id);
   const zip = new JSZip();
-  const summary = ["position,set,label,state,failed,failMode,stoppedAtStep,error"];
+  const summary = ["position,set,label,state,failed,failMode,stoppedAtIncrement,error"];
   for (const row of rows) {
+    const status = runStatusOnRead(row.status);
     const name = `${String(row.position + 1).padStart(4, "0")}-${safeName(row.set.id)}.csv`;
     if (row.csv !== null) zip.file(`sets/${name}`, row.csv);
     const cells = [
@@ -109,9 +114,9 @@ export async function studyResultsZip(
       row.set.id,
       row.set.label,
       row.state,
-      row.status?.failed ?? "",
-      row.status?.failMode ?? "",
-      row.status?.stoppedAtStep ?? "",
+      status?.failed ?? "",
+      status?.failMode ?? "",
+      status?.stoppedAtIncrement ?? "",
       row.error ?? "",
     ];
     summary.push(cells.map((c) => JSON.stringify(String(c))).join(","));

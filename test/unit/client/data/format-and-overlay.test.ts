@@ -28,7 +28,7 @@ describe("overlay of two revisions", () => {
 
   it("keeps the base's path text so repeat blocks stay readable", () => {
     const a = scenarioWith("SMC", 11000);
-    const text = "repeat 2 grow 1\n  e11=0.2% in 60\n  s11=0 in 60\nend\n";
+    const text = "repeat 2 grow 1\n  ε11=0.2% over 60\n  σ11=0 over 60\nend\n";
     const merged = overlayRevisions(
       { number: 3, scenario: a, workbench: { pathText: text, hidden: ["A"] } },
       { number: 2, scenario: a },

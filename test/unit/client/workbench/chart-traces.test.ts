@@ -7,7 +7,7 @@ function source(id: string, rows: number): TraceSource {
   const columns = {} as ResultColumns;
   for (const c of RESULT_COLUMNS) columns[c] = new Float64Array(rows);
   for (let i = 0; i < rows; i++) {
-    columns.step[i] = i;
+    columns.increment[i] = i;
     columns.eps11[i] = i * 1e-4;
     columns.sig11[i] = i < rows / 2 ? i : rows - i;
     columns.d1[i] = i > 10 ? 0.001 * i : 0;
@@ -32,10 +32,10 @@ describe("chart traces", () => {
     expect(built.rowsOf).toHaveLength(built.traces.length);
   });
 
-  it("marks damage onset, peak and failure at their rows, and the step cursor", () => {
+  it("marks damage onset, peak and failure at their rows, and the increment cursor", () => {
     const built = buildChart(stressStrainDef("eps11", "sig11"), [source("A", 100)], 42);
     const marks = built.traces.find((t) => t.meta.series === "marks")!;
-    expect(marks.text).toEqual(["damage onset", "peak", "failure", "step 42"]);
+    expect(marks.text).toEqual(["damage onset", "peak", "failure", "increment 42"]);
     expect(Array.from(built.rowsOf[built.traces.indexOf(marks)])).toEqual([11, 50, 99, 42]);
     expect(marks.y[1]).toBe(50);
   });

@@ -33,7 +33,7 @@ describe("chunked run", () => {
       now: fakeClock(),
     });
     expect(chunks.length).toBeGreaterThan(2);
-    const buf = new ResultBuffer(run.columns.step.length);
+    const buf = new ResultBuffer(run.columns.increment.length);
     for (const c of chunks) buf.append(c);
     expect(buf.rows).toBe(251);
     const straight = new PathRun(demo, legs("tension-unload-compression"));

@@ -6,7 +6,7 @@ import { ResultBuffer } from "@/lib/client/workbench/result-buffer";
 function buffer(rows: number, scale: number) {
   const b = new ResultBuffer(rows + 3);
   for (const c of RESULT_COLUMNS)
-    for (let i = 0; i < rows; i++) b.columns[c][i] = c === "step" ? i : i * scale;
+    for (let i = 0; i < rows; i++) b.columns[c][i] = c === "increment" ? i : i * scale;
   b.rows = rows;
   return b;
 }

@@ -17,11 +17,11 @@ function doc(text: string) {
 }
 
 describe("table edits of the path object", () => {
-  const start = doc("e11=0.01 in 10\nrepeat 2 grow 1\n  e11=0.002 in 5\n  s11=0 in 5\nend");
+  const start = doc("ε11=0.01 over 10\nrepeat 2 grow 1\n  ε11=0.002 over 5\n  σ11=0 over 5\nend");
 
   it("changes one component of a leg inside a block", () => {
     const d = updateLeg(start, { item: 1, leg: 0 }, (l) => setComponent(l, 1, "strain", 0.003));
-    expect(formatPathText(d)).toContain("  e11=0.002 e22=0.003 in 5");
+    expect(formatPathText(d)).toContain("  ε11=0.002 ε22=0.003 over 5");
     expect(formatPathText(start)).not.toContain("e22");
   });
 
@@ -29,7 +29,7 @@ describe("table edits of the path object", () => {
     expect(formatPathText(moveItem(start, 0, 1)).split("\n")[0]).toBe("repeat 2 grow 1");
     expect(moveItem(start, 0, -1)).toBe(start);
     expect(formatPathText(removeLeg(start, { item: 1, leg: 1 }))).toBe(
-      "e11=0.01 in 10\nrepeat 2 grow 1\n  e11=0.002 in 5\nend",
+      "ε11=0.01 over 10\nrepeat 2 grow 1\n  ε11=0.002 over 5\nend",
     );
     expect(
       removeLeg(removeLeg(start, { item: 1, leg: 1 }), { item: 1, leg: 0 }).items,

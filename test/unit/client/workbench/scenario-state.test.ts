@@ -45,7 +45,7 @@ describe("scenario file of the workbench", () => {
   });
 
   it("keeps no generator for blocks of another shape", () => {
-    const block = doc("repeat 2 grow 1\n e11=0.01 e22=0.01 in 5\n s11=0 in 5\nend").items[0];
+    const block = doc("repeat 2 grow 1\n ε11=0.01 ε22=0.01 over 5\n σ11=0 over 5\nend").items[0];
     expect(block.kind === "repeat" && repeatToGenerator(block.block)).toBeNull();
   });
 
@@ -66,7 +66,7 @@ describe("scenario file of the workbench", () => {
 
   it("writes the legs as text when the stored text no longer matches them", () => {
     const json = JSON.parse(JSON.stringify(toScenarioFile(state(text), doc(text))));
-    json.workbench.pathText = "e11=0.5% in 10";
+    json.workbench.pathText = "ε11=0.5% over 10";
     const parsed = parseScenarioFile(json);
     if (!parsed.ok) throw new Error("parse");
     const back = fromScenario(parsed.scenario, json);

@@ -46,15 +46,15 @@ describe("templates and presets", () => {
 
 describe("result buffer", () => {
   it("assembles chunks in order and refuses a gap", () => {
-    const src = columns(10, (name, i) => (name === "step" ? i : i * 2));
+    const src = columns(10, (name, i) => (name === "increment" ? i : i * 2));
     const buf = new ResultBuffer(10);
     buf.append(sliceChunk(src, 0, 4));
     buf.append(sliceChunk(src, 4, 6));
     expect(buf.rows).toBe(10);
-    expect(Array.from(buf.columns.step)).toEqual(Array.from(src.step));
+    expect(Array.from(buf.columns.increment)).toEqual(Array.from(src.increment));
     expect(() => buf.append(sliceChunk(src, 2, 1))).toThrow(/expected 10/);
     expect(buf.done).toBe(false);
-    buf.finish({ failed: false, failMode: null, stoppedAtStep: null, warnings: [] });
+    buf.finish({ failed: false, failMode: null, stoppedAtIncrement: null, warnings: [] });
     expect(buf.done).toBe(true);
   });
 });

@@ -4,14 +4,14 @@ import { setListReducer } from "@/lib/client/workbench/set-list";
 import { initModel, workbenchReducer } from "@/lib/client/workbench/workbench-reducer";
 
 const entries = setListReducer([], { type: "add", params: PRESETS[0].params });
-const model = initModel({ name: "x", entries, pathText: "e11=1% in 10" });
+const model = initModel({ name: "x", entries, pathText: "ε11=1% over 10" });
 
 describe("workbench state", () => {
   it("keeps the last valid path while the text has an error, and reports where", () => {
-    const bad = workbenchReducer(model, { type: "pathText", text: "e11=1% in 10\nq in 3" });
+    const bad = workbenchReducer(model, { type: "pathText", text: "ε11=1% over 10\nq in 3" });
     expect(bad.pathErrors[0]).toMatchObject({ line: 2, column: 1 });
     expect(bad.doc).toBe(model.doc);
-    const good = workbenchReducer(bad, { type: "pathText", text: "e11=2% in 10" });
+    const good = workbenchReducer(bad, { type: "pathText", text: "ε11=2% over 10" });
     expect(good.pathErrors).toEqual([]);
     expect(good.doc.items[0]).toMatchObject({ kind: "leg", leg: { target: [0.02, 0, 0] } });
   });
@@ -30,7 +30,7 @@ describe("workbench state", () => {
       ],
     };
     const m = workbenchReducer(model, { type: "pathDoc", doc: JSON.parse(JSON.stringify(doc)) });
-    expect(m.pathText).toBe("s11=5 e22=0.001 in 4");
+    expect(m.pathText).toBe("σ11=5 ε22=0.001 over 4");
   });
 
   it("selects a new set and falls back when the active one is removed", () => {
@@ -43,7 +43,7 @@ describe("workbench state", () => {
   it("bumps the epoch when the whole state is replaced", () => {
     const m = workbenchReducer(model, {
       type: "replace",
-      state: { name: "y", entries, pathText: "g12=1% in 5" },
+      state: { name: "y", entries, pathText: "γ12=1% over 5" },
     });
     expect(m.epoch).toBe(1);
     expect(m.name).toBe("y");

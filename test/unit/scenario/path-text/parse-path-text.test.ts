@@ -19,7 +19,7 @@ function firstError(text: string) {
 
 describe("path notation", () => {
   it("reads the tension → unload → compression path of spec C.1", () => {
-    const legs = legsOf("# demo\ne11=1% in 100\ns11=0 in 50\ne11=-0.5% in 100\n");
+    const legs = legsOf("# demo\ne11=1% over 100\ns11=0 over 50\ne11=-0.5% over 100\n");
     expect(legs).toEqual([
       { control: ["strain", "stress", "stress"], target: [0.01, 0, 0], increments: 100 },
       { control: ["stress", "stress", "stress"], target: [0, 0, 0], increments: 50 },
@@ -28,16 +28,16 @@ describe("path notation", () => {
   });
 
   it("reads several components, commas and shear strain", () => {
-    expect(legsOf("e11=0.002, e22=-1e-3 g12=0.5% in 7")[0]).toEqual({
+    expect(legsOf("ε11=0.002, ε22=-1e-3 γ12=0.5% over 7")[0]).toEqual({
       control: ["strain", "strain", "strain"],
       target: [0.002, -0.001, 0.005],
       increments: 7,
     });
-    expect(legsOf("s12=20 s11=10 in 3")[0].target).toEqual([10, 0, 20]);
+    expect(legsOf("σ12=20 σ11=10 over 3")[0].target).toEqual([10, 0, 20]);
   });
 
   it("expands a growing repeat block: cycle k scaled by (1 + grow·k)", () => {
-    const legs = legsOf("repeat 3 grow 1\n  e11=0.002 in 60\n  s11=0 in 60\nend");
+    const legs = legsOf("repeat 3 grow 1\n  ε11=0.002 over 60\n  σ11=0 over 60\nend");
     expect(legs).toHaveLength(6);
     expect(legs.filter((_, i) => i % 2 === 0).map((l) => l.target[0])).toEqual([
       0.002, 0.004, 0.006,
@@ -45,27 +45,47 @@ describe("path notation", () => {
     expect(legs[1].target).toEqual([0, 0, 0]);
   });
 
+  it("reads the ASCII words for keyboards without Greek", () => {
+    expect(legsOf("strain11=1% strain22=-0.1% shear12=0.5% over 7")).toEqual(
+      legsOf("ε11=1% ε22=-0.1% γ12=0.5% over 7"),
+    );
+    expect(legsOf("stress11=10 stress22=5 stress12=20 over 3")[0]).toEqual({
+      control: ["stress", "stress", "stress"],
+      target: [10, 5, 20],
+      increments: 3,
+    });
+    expect(legsOf("τ12=20 over 3")).toEqual(legsOf("σ12=20 over 3"));
+  });
+
+  it('still reads version 1\'s names and "in" (texts saved in earlier revisions)', () => {
+    expect(legsOf("e11=1% in 100\ns11=0 in 50\ng12=0.5% e22=0.1% in 4\ns12=3 s22=2 in 2")).toEqual(
+      legsOf("ε11=1% over 100\nσ11=0 over 50\nγ12=0.5% ε22=0.1% over 4\nσ12=3 σ22=2 over 2"),
+    );
+  });
+
   it.each([
-    ["e11=1% in 100\nx11=3 in 5", 2, 1, 'unknown component "x11"'],
-    ["e12=0.01 in 10", 1, 1, "g12"],
-    ["e11=0.01", 1, 9, 'expected "in <increments>"'],
-    ["e11 0.01 in 5", 1, 5, 'expected "="'],
-    ["e11=abc in 5", 1, 5, "expected a number"],
-    ["e11=0.01 in 0", 1, 13, "whole number"],
-    ["e11=0.01 in 2.5", 1, 13, "whole number"],
-    ["s11=30% in 5", 1, 7, "strains only"],
-    ["e11=1 s11=2 in 5", 1, 7, "prescribed twice"],
-    ["e11=0.01 in 5 more", 1, 15, 'unexpected "more"'],
-    ["  e11=0.01 in 5 ;", 1, 17, 'unexpected character ";"'],
+    ["ε11=1% over 100\nx11=3 over 5", 2, 1, 'unknown component "x11"'],
+    ["e12=0.01 over 10", 1, 1, "γ12"],
+    ["Σ11=5 over 3", 1, 1, 'lower case: "σ11"'],
+    ["ε11=0.01", 1, 9, 'expected "over <increments>"'],
+    ["ε11 0.01 over 5", 1, 5, 'expected "="'],
+    ["ε11=abc over 5", 1, 5, "expected a number"],
+    ["ε11=0.01 over 0", 1, 15, "whole number"],
+    ["ε11=0.01 over 2.5", 1, 15, "whole number"],
+    ["σ11=30% over 5", 1, 7, "strains only"],
+    ["ε11=1 σ11=2 over 5", 1, 7, "prescribed twice"],
+    ["ε11=0.01 over 5 more", 1, 17, 'unexpected "more"'],
+    ["  ε11=0.01 over 5 ;", 1, 19, 'unexpected character ";"'],
     ["end", 1, 1, '"end" without'],
-    ["repeat 2\ne11=0.01 in 5", 1, 1, "never closed"],
+    ["repeat 2\nε11=0.01 over 5", 1, 1, "never closed"],
     ["repeat 2\nrepeat 3", 2, 1, "cannot hold another"],
-    ["repeat 2 grow\ne11=1 in 1\nend", 1, 14, 'number after "grow"'],
+    ["repeat 2 grow\nε11=1 over 1\nend", 1, 14, 'number after "grow"'],
     ["repeat 2\nend", 2, 1, "has no legs"],
     ["# only a note\n", 1, 1, "empty"],
-    ["e11=0.01 in 1000000\ne11=0 in 5", 1, 1, "limit"],
-    ["e11=1e400 in 5", 1, 5, "not a finite number"],
-    ["repeat 3 grow 1e308\n  e11=10 in 1\nend", 1, 1, "too large"],
+    ["ε11=0.01 over 1000000\nε11=0 over 5", 1, 1, "limit"],
+    ["ε11=1e400 over 5", 1, 5, "not a finite number"],
+    ["repeat 3 grow 1e308\n  ε11=10 over 1\nend", 1, 1, "too large"],
+    ["e11=0.01 in 5 more", 1, 15, 'unexpected "more"'],
   ])("reports %j at line %i, column %i", (text, line, column, message) => {
     const e = firstError(text);
     expect(e.line).toBe(line);
@@ -74,7 +94,7 @@ describe("path notation", () => {
   });
 
   it("reports every bad line, not only the first", () => {
-    const r = parsePathText("x in 1\ne11=0.01 in 5\ny in 2");
+    const r = parsePathText("x over 1\nε11=0.01 over 5\ny over 2");
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.errors.map((e) => e.line)).toEqual([1, 3]);
   });
@@ -110,11 +130,45 @@ const item = fc.oneof(
 );
 
 describe("text ⇄ object", () => {
+  it('writes the symbols and "over", leaving out directions free at zero stress', () => {
+    const doc: PathDoc = {
+      items: [
+        {
+          kind: "leg",
+          leg: {
+            control: ["strain", "stress", "strain"],
+            target: [0.01, 5, -0.002],
+            increments: 60,
+          },
+        },
+        {
+          kind: "repeat",
+          block: {
+            count: 2,
+            grow: 0.5,
+            legs: [
+              { control: ["stress", "strain", "stress"], target: [0, 0.001, 0], increments: 3 },
+            ],
+          },
+        },
+        {
+          kind: "leg",
+          leg: { control: ["stress", "stress", "stress"], target: [0, 0, 0], increments: 9 },
+        },
+      ],
+    };
+    expect(formatPathText(doc)).toBe(
+      "ε11=0.01 σ22=5 γ12=-0.002 over 60\nrepeat 2 grow 0.5\n  ε22=0.001 over 3\nend\nσ11=0 over 9",
+    );
+  });
+
   it("formatting then parsing gives back the same path object", () => {
     fc.assert(
       fc.property(fc.array(item, { minLength: 1, maxLength: 6 }), (items) => {
         const doc: PathDoc = { items };
-        const r = parsePathText(formatPathText(doc));
+        const text = formatPathText(doc);
+        expect(text).not.toMatch(/\b[esg](11|22|12)=|\bin \d/);
+        const r = parsePathText(text);
         expect(r.ok).toBe(true);
         if (r.ok) expect(r.doc).toEqual(doc);
       }),

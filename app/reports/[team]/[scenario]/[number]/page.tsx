@@ -106,7 +106,7 @@ export default async function CalibrationReportPage({ params }: { params: Promis
             <li key={s.setId}>
               Set {s.setId} on the scenario path:{" "}
               {s.failed
-                ? `fails (${s.failMode}) at increment ${s.stoppedAtStep ?? "—"}`
+                ? `fails (${s.failMode}) at increment ${s.stoppedAtIncrement ?? "—"}`
                 : "runs to the end without failure"}
               {s.warnings.length > 0 ? `; ${s.warnings.join("; ")}` : ""}
             </li>

@@ -34,7 +34,7 @@ function check(csv: string) {
   return compareHistory(set.id, read.history, replay.columns, replay.rowOf, DEFAULT_TOLERANCE);
 }
 
-/** Adds `delta` to one column from the row whose step is `from` on. */
+/** Adds `delta` to one column from the row whose increment is `from` on. */
 function perturb(csv: string, column: string, from: number, delta: number): string {
   const [header, ...rows] = csv.trim().split("\n");
   const index = header.split(",").indexOf(column);

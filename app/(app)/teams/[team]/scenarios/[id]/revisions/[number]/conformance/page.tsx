@@ -92,7 +92,7 @@ export default async function ConformancePage({
               <td className={c.passed ? "text-verdigris-dark" : "text-kiln-dark"}>
                 {c.passed ? "pass" : "fail"}
               </td>
-              <td>{c.firstFailStep ?? "—"}</td>
+              <td>{c.firstFailIncrement ?? "—"}</td>
               <td>{c.author ?? "former member"}</td>
             </tr>
           ))}

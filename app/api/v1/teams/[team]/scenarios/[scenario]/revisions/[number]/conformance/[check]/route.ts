@@ -11,7 +11,7 @@ export const GET = tokenRoute<Params>("team:read", async ({ db, actor, params })
     id: row.id,
     fileName: row.fileName,
     passed: row.passed,
-    firstFailIncrement: row.firstFailStep,
+    firstFailIncrement: row.firstFailIncrement,
     createdAt: row.createdAt,
     result: row.result,
   };

@@ -1,20 +1,20 @@
 "use client";
 
-export interface StepCursorProps {
+export interface IncrementCursorProps {
   value: number | null;
   max: number;
-  onChange: (step: number | null) => void;
+  onChange: (increment: number | null) => void;
 }
 
-/** The step shown on every chart and highlighted in the table; arrow keys move it. */
-export function StepCursor({ value, max, onChange }: StepCursorProps) {
+/** The increment shown on every chart and highlighted in the table; arrow keys move it. */
+export function IncrementCursor({ value, max, onChange }: IncrementCursorProps) {
   return (
     <div className="flex flex-wrap items-center gap-3 rounded-md border border-glaze-line bg-white px-3 py-1.5 text-sm">
-      <label htmlFor="step-cursor" className="text-ink-soft">
-        Step cursor
+      <label htmlFor="increment-cursor" className="text-ink-soft">
+        Increment cursor
       </label>
       <input
-        id="step-cursor"
+        id="increment-cursor"
         type="range"
         min={0}
         max={Math.max(0, max)}
@@ -22,8 +22,8 @@ export function StepCursor({ value, max, onChange }: StepCursorProps) {
         onChange={(e) => onChange(Number(e.target.value))}
         className="min-w-40 flex-1 accent-[#2f7a74]"
       />
-      <output htmlFor="step-cursor" className="w-28 font-mono text-xs">
-        {value === null ? "off" : `step ${value} / ${max}`}
+      <output htmlFor="increment-cursor" className="w-28 font-mono text-xs">
+        {value === null ? "off" : `increment ${value} / ${max}`}
       </output>
       <button
         type="button"
