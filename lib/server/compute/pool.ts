@@ -134,6 +134,11 @@ export function compute<T>(task: ComputeTask, person: string | null, label: Task
   return startTask<T>(task, person, label).done;
 }
 
+/** Tasks in flight for one person (or the whole instance): for tests and diagnostics. */
+export function tasksInFlight(person?: string): number {
+  return pool().gate.inFlight(person);
+}
+
 /** For tests and shutdown: ends every thread. */
 export async function closeComputePool(): Promise<void> {
   const holder = globalThis as Holder;
