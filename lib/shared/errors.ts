@@ -12,6 +12,7 @@ export type ErrorCode =
   | `expired:${string}`
   | `used:${string}`
   | `rate-limited:${string}`
+  | `unavailable:${string}`
   | "unauthenticated"
   | "unverified";
 

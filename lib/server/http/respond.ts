@@ -20,6 +20,7 @@ const STATUS_BY_PREFIX: [string, number][] = [
   ["expired:", 410],
   ["used:", 410],
   ["rate-limited:", 429],
+  ["unavailable:", 503],
 ];
 
 export function statusOf(code: string): number {
@@ -38,7 +39,11 @@ export function errorResponse(error: unknown): Response {
     const body: ApiErrorBody = { error: { code: error.code, message: error.message } };
     if (error.field) body.error.path = error.field;
     if (error instanceof DetailedAppError) Object.assign(body.error, error.details);
-    return jsonResponse(body, statusOf(error.code));
+    const response = jsonResponse(body, statusOf(error.code));
+    // A full compute pool (and any other "come back later") says when to come back.
+    const wait = (error as { retryAfterSeconds?: unknown }).retryAfterSeconds;
+    if (typeof wait === "number") response.headers.set("retry-after", String(wait));
+    return response;
   }
   const db = classifyDbError(error);
   if (db?.kind === "unavailable") {

@@ -1,0 +1,74 @@
+/**
+ * The compute worker's entry (bundled by build-worker.ts into a plain JS file piscina loads).
+ * Announces the start on the task's port, so the request thread counts the budget from here and
+ * not from the queue, runs the task, and sends expected errors as data: an AppError's class and
+ * fields do not survive the thread boundary.
+ */
+import { replayError, canReplay } from "@/lib/calibration/replay";
+import { readCurveCsv } from "@/lib/csv/read-curve-csv";
+import { isAppError } from "@/lib/shared/errors";
+import { runConformance } from "@/lib/server/handoff/conformance/run-check";
+import { DetailedAppError } from "@/lib/server/workspace/errors";
+
+import { reportCurvesInWorker } from "./report-curves-task";
+import { runInWorker } from "./run-task";
+import type { ComputeTask, PostedTask, TaskOutcome } from "./task-types";
+
+function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
+  switch (task.kind) {
+    case "run":
+      return runInWorker(task.request, port);
+    case "report-curves":
+      return reportCurvesInWorker(task.sets, task.legs, task.perSetBudgetMs);
+    case "conformance": {
+      const { result, curves } = runConformance(
+        task.scenario,
+        task.setId,
+        task.text,
+        task.tolerance,
+        task.mapping,
+      );
+      return { result, curves };
+    }
+    case "replay-residuals":
+      return task.records
+        .filter((r) => canReplay(r.input.testType))
+        .map((r) => {
+          const n = r.input.points.strain.length;
+          const squared = replayError(task.params, r.input.testType, r.input.points);
+          const rms = Number.isFinite(squared) && n > 0 ? Math.sqrt(squared / n) : -1;
+          return { id: r.id, rms, points: n };
+        });
+    case "read-curve-csv": {
+      // Only what the upload stores comes back: the table's cells stay in the worker.
+      const read = readCurveCsv(task.text, task.mapping);
+      if (!read.ok) return { ok: false, error: read.error };
+      return {
+        ok: true,
+        points: read.points,
+        headers: read.table.headers,
+        warnings: read.warnings,
+      };
+    }
+  }
+}
+
+export default function computeTask(posted: PostedTask): TaskOutcome {
+  const { port, ...task } = posted;
+  port.postMessage({ type: "start" });
+  try {
+    return { ok: true, value: perform(task as ComputeTask, port) };
+  } catch (error) {
+    if (!isAppError(error)) throw error;
+    return {
+      ok: false,
+      error: {
+        code: error.code,
+        message: error.message,
+        field: error.field,
+        details: error instanceof DetailedAppError ? error.details : undefined,
+      },
+    };
+  }
+  // The port is closed by the request thread once it has read the last message.
+}

@@ -1,0 +1,51 @@
+/**
+ * What the request thread hands a compute worker, and what comes back. Types only: both sides
+ * import this file, and nothing here may pull runtime code across the thread boundary.
+ */
+import type { MessagePort } from "node:worker_threads";
+
+import type { RecordPoints } from "@/lib/calibration/types";
+import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
+import type { Leg, MaterialParams } from "@/lib/mechanics/types";
+import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
+import type { Scenario } from "@/lib/scenario/scenario-schema";
+import type { ConformanceTolerance } from "@/lib/server/handoff/conformance/types";
+import type { HistoryMapping } from "@/lib/server/handoff/conformance/upload-schema";
+import type { RunRequest } from "@/lib/server/handoff/runs/run-request";
+
+export type ComputeTask =
+  | { kind: "run"; request: RunRequest }
+  | { kind: "report-curves"; sets: ParameterSet[]; legs: Leg[]; perSetBudgetMs: number }
+  | {
+      kind: "conformance";
+      scenario: Scenario;
+      setId: string | undefined;
+      text: string;
+      tolerance: ConformanceTolerance;
+      mapping: HistoryMapping | undefined;
+    }
+  | {
+      kind: "replay-residuals";
+      params: MaterialParams;
+      records: { id: string; input: { testType: TestType; points: RecordPoints } }[];
+    }
+  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined };
+
+/** A task as posted: the port carries "start" and, for runs, the streamed output. */
+export type PostedTask = ComputeTask & { port: MessagePort };
+
+/** An expected error rebuilt on the request thread (class identity does not cross threads). */
+export interface SentAppError {
+  code: string;
+  message: string;
+  field?: string;
+  details?: Record<string, unknown>;
+}
+
+export type TaskOutcome<T = unknown> = { ok: true; value: T } | { ok: false; error: SentAppError };
+
+export type PortMessage =
+  | { type: "start" }
+  | { type: "head"; warnings: string[] }
+  | { type: "chunk"; bytes: Uint8Array }
+  | { type: "end" };
