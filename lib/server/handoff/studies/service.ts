@@ -15,6 +15,7 @@ import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { CAUTION_LINES } from "@/lib/shared/caution";
 import { safeName } from "@/lib/server/handoff/bundle/build";
+import { studySummaryCsv } from "@/lib/shared/study-summary-csv";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { notFound, requireUuid } from "@/lib/server/workspace/errors";
 import { parseWithPath } from "@/lib/server/workspace/parse";
@@ -100,23 +101,11 @@ export async function studyResultsZip(
   const study = await studyOf(db, ctx.team.id, studyId);
   const rows = await listStudyResults(db, study.id);
   const zip = new JSZip();
-  const summary = ["position,set,label,state,failed,failMode,stoppedAtStep,error"];
   for (const row of rows) {
     const name = `${String(row.position + 1).padStart(4, "0")}-${safeName(row.set.id)}.csv`;
     if (row.csv !== null) zip.file(`sets/${name}`, row.csv);
-    const cells = [
-      row.position + 1,
-      row.set.id,
-      row.set.label,
-      row.state,
-      row.status?.failed ?? "",
-      row.status?.failMode ?? "",
-      row.status?.stoppedAtStep ?? "",
-      row.error ?? "",
-    ];
-    summary.push(cells.map((c) => JSON.stringify(String(c))).join(","));
   }
-  zip.file("summary.csv", summary.join("\n") + "\n");
+  zip.file("summary.csv", studySummaryCsv(rows));
   zip.file(
     "README.txt",
     [
