@@ -3,10 +3,11 @@
  * contract's column names, then one line per stored increment, numbers in shortest round-trip form.
  */
 import { RESULT_COLUMNS, type ResultColumns } from "@/lib/mechanics/types";
+import { csvNumber, csvRow } from "@/lib/shared/csv-writer";
 
 export { resultsToJson, resultsJsonChunks } from "./results-json";
 
-export const CSV_HEADER = RESULT_COLUMNS.join(",");
+export const CSV_HEADER = csvRow(RESULT_COLUMNS);
 
 /**
  * The CSV text in pieces of `rowsPerChunk` lines, so a 1,000,000-row run never has to be one
@@ -20,11 +21,11 @@ export function* resultsCsvChunks(
   const arrays = RESULT_COLUMNS.map((name) => columns[name]);
   const width = arrays.length;
   let chunk = CSV_HEADER + "\n";
-  // String(x) is the shortest round-trip form and writes -0 as "0"; increment, leg and failed are
+  // csvNumber is String(x): the shortest round-trip form and writes -0 as "0"; increment, leg and failed are
   // stored as whole numbers, so they print without a decimal point.
   for (let r = 0; r < rows; r++) {
-    let line = String(arrays[0][r]);
-    for (let c = 1; c < width; c++) line += "," + String(arrays[c][r]);
+    let line = csvNumber(arrays[0][r]);
+    for (let c = 1; c < width; c++) line += "," + csvNumber(arrays[c][r]);
     chunk += line + "\n";
     if ((r + 1) % rowsPerChunk === 0) {
       yield chunk;

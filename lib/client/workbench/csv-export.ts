@@ -3,6 +3,7 @@
  * one file with a first column `set` naming the set of each row, then the same columns.
  */
 import { resultsToCsv } from "@/lib/scenario/results-csv";
+import { csvText } from "@/lib/shared/csv-writer";
 import type { ResultBuffer } from "./result-buffer";
 
 export function setCsv(buffer: ResultBuffer): string {
@@ -15,7 +16,9 @@ export function allSetsCsv(sets: { id: string; buffer: ResultBuffer }[]): string
   for (const { id, buffer } of sets) {
     const lines = setCsv(buffer).split("\n");
     header = `set,${lines[0]}`;
-    for (let i = 1; i < lines.length; i++) if (lines[i]) parts.push(`${id},${lines[i]}`);
+    // The result lines are numbers only; the set id is the one text cell and is quoted as needed.
+    const idCell = csvText(id);
+    for (let i = 1; i < lines.length; i++) if (lines[i]) parts.push(`${idCell},${lines[i]}`);
   }
   return `${header}\n${parts.join("\n")}\n`;
 }

@@ -40,12 +40,12 @@ export function reportCurvesInWorker(sets: ParameterSet[], legs: Leg[], perSetBu
     runs.flatMap(({ set, run }) => [
       {
         name: `${set.id} d1`,
-        x: run.columns.step.subarray(0, run.rows),
+        x: run.columns.increment.subarray(0, run.rows),
         y: run.columns.d1.subarray(0, run.rows),
       },
       {
         name: `${set.id} d2`,
-        x: run.columns.step.subarray(0, run.rows),
+        x: run.columns.increment.subarray(0, run.rows),
         y: run.columns.d2.subarray(0, run.rows),
       },
     ]),

@@ -6,6 +6,7 @@ import "server-only";
  */
 import type { ResultColumns } from "@/lib/mechanics/types";
 import { CAUTION_LINES } from "@/lib/shared/caution";
+import { csvRow, type CsvValue } from "@/lib/shared/csv-writer";
 
 import type { History } from "./read-history";
 import type { ConformanceResult } from "./types";
@@ -17,7 +18,8 @@ export function differencesCsv(
   rowOf: Int32Array,
 ): string {
   const q = result.quantities.map((c) => c.quantity);
-  const head = [
+  // Each comment line is one cell, so a comma or quote in the set id cannot shift the columns.
+  const comments = [
     `# Craquelure conformance check, parameter set ${result.setId}: ${result.passed ? "PASS" : "FAIL"}`,
     `# tolerance: stresses ${result.tolerance.stressFraction * 100} % of peak stress ${result.peakStress} MPa; damage ${result.tolerance.damage}`,
     ...result.quantities.map(
@@ -25,25 +27,23 @@ export function differencesCsv(
         `# ${c.quantity}: max abs ${c.maxAbs}, RMS ${c.rms}, max rel ${c.maxRel}, first increment beyond tolerance ${c.firstFailIncrement ?? "none"}`,
     ),
     ...CAUTION_LINES.map((l) => `# ${l}`),
-    [
+  ];
+  const lines = [
+    ...comments.map((c) => csvRow([c])),
+    csvRow([
       "increment",
       ...q.flatMap((n) => [`${n}_uploaded`, `${n}_craquelure`, `${n}_difference`]),
-    ].join(","),
+    ]),
   ];
-  const lines = [...head];
   for (let i = 0; i < history.rows; i++) {
     const row = rowOf[i];
-    const cells = [String(history.increment ? history.increment[i] : i)];
+    const cells: CsvValue[] = [history.increment ? history.increment[i] : i];
     for (const n of q) {
       const theirs = history[n]![i];
       const ours = row >= 0 ? columns[n][row] : NaN;
-      cells.push(
-        String(theirs),
-        row >= 0 ? String(ours) : "",
-        row >= 0 ? String(theirs - ours) : "",
-      );
+      cells.push(theirs, row >= 0 ? ours : null, row >= 0 ? theirs - ours : null);
     }
-    lines.push(cells.join(","));
+    lines.push(csvRow(cells));
   }
   return lines.join("\n") + "\n";
 }

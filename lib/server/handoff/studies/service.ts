@@ -16,6 +16,7 @@ import { recordAudit } from "@/lib/server/access/audit";
 import { CAUTION_LINES } from "@/lib/shared/caution";
 import { runStatusOnRead } from "@/lib/scenario/version1-names";
 import { safeName } from "@/lib/server/handoff/bundle/build";
+import { studySummaryCsv } from "@/lib/shared/study-summary-csv";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { notFound, requireUuid } from "@/lib/server/workspace/errors";
 import { parseWithPath } from "@/lib/server/workspace/parse";
@@ -104,24 +105,14 @@ export async function studyResultsZip(
   const study = await studyOf(db, ctx.team.id, studyId);
   const rows = await listStudyResults(db, study.id);
   const zip = new JSZip();
-  const summary = ["position,set,label,state,failed,failMode,stoppedAtIncrement,error"];
   for (const row of rows) {
-    const status = runStatusOnRead(row.status);
     const name = `${String(row.position + 1).padStart(4, "0")}-${safeName(row.set.id)}.csv`;
     if (row.csv !== null) zip.file(`sets/${name}`, row.csv);
-    const cells = [
-      row.position + 1,
-      row.set.id,
-      row.set.label,
-      row.state,
-      status?.failed ?? "",
-      status?.failMode ?? "",
-      status?.stoppedAtIncrement ?? "",
-      row.error ?? "",
-    ];
-    summary.push(cells.map((c) => JSON.stringify(String(c))).join(","));
   }
-  zip.file("summary.csv", summary.join("\n") + "\n");
+  zip.file(
+    "summary.csv",
+    studySummaryCsv(rows.map((row) => ({ ...row, status: runStatusOnRead(row.status) }))),
+  );
   zip.file(
     "README.txt",
     [
