@@ -18,7 +18,7 @@ import { safeNextPath } from "@/lib/shared/safe-next";
 
 export async function signUpAction(input: unknown): Promise<ActionResult> {
   const result = await runAction(async () => {
-    await signUp(getDb(), input, mailDeps());
+    await signUp(getDb(), input, await getClientAddress(), mailDeps());
   });
   if (result.ok) redirect("/sign-in?notice=check-mail");
   return result;

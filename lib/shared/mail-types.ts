@@ -23,6 +23,8 @@ export const MAIL_QUEUED_NOTICE =
 export interface MailDeps {
   mailer: Mailer;
   appUrl: string;
+  /** Tells the outbox sender that mail was queued for it (the app starts its sender here). */
+  wakeOutbox?: () => void;
 }
 
 export function linkTo(appUrl: string, path: string): string {

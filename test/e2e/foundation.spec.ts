@@ -20,6 +20,10 @@ function linkPath(message: OutboxMessage, prefix: string): string {
   return match[1];
 }
 
+// Shown after every sign-up, whether or not the address had an account (issue 12 item 5).
+const SIGN_UP_NOTICE =
+  "Thank you. We sent a mail to that address: follow its link to confirm the address, then sign in.";
+
 async function signUpAndVerify(page: Page, who: { name: string; email: string }) {
   await page.goto("/sign-up");
   await page.getByLabel("Name").fill(who.name);
@@ -27,6 +31,7 @@ async function signUpAndVerify(page: Page, who: { name: string; email: string })
   await page.getByLabel("Password").fill(PASSWORD);
   await page.getByRole("button", { name: "Create account" }).click();
   await page.waitForURL(/\/sign-in\?notice=check-mail/);
+  await page.getByText(SIGN_UP_NOTICE).waitFor();
 
   const mail = await readMail({ to: who.email, subject: "Confirm your e-mail" });
   await page.goto(linkPath(mail, "/verify"));
@@ -53,6 +58,19 @@ describe("foundation: accounts, a team, an invitation", () => {
     const adaContext = await newContext(browser);
     const adaPage = await adaContext.newPage();
     await signUpAndVerify(adaPage, ada);
+
+    // Signing up again with Ada's address answers exactly like a new sign-up; Ada is told by mail.
+    const probePage = await (await newContext(browser)).newPage();
+    await probePage.goto("/sign-up");
+    await probePage.getByLabel("Name").fill("Someone else");
+    await probePage.getByLabel("E-mail address").fill(ada.email);
+    await probePage.getByLabel("Password").fill(PASSWORD);
+    await probePage.getByRole("button", { name: "Create account" }).click();
+    await probePage.waitForURL(/\/sign-in\?notice=check-mail/);
+    await probePage.getByText(SIGN_UP_NOTICE).waitFor();
+    expect(await probePage.getByText("exists already").count()).toBe(0);
+    await readMail({ to: ada.email, subject: "Someone tried to sign up" });
+
     await signIn(adaPage, ada);
     await adaPage.waitForURL(/\/teams$/);
     await expect(adaPage.getByTestId("signed-in-as").textContent()).resolves.toBe(ada.email);

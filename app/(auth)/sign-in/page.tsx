@@ -9,7 +9,9 @@ export const metadata: Metadata = { title: "Sign in" };
 
 // Notices come from redirects of our own actions; unknown values show nothing.
 const NOTICES: Record<string, string> = {
-  "check-mail": "Account created. We sent you a link to confirm your e-mail address; then sign in.",
+  // The same words whether or not the address had an account: sign-up must not tell.
+  "check-mail":
+    "Thank you. We sent a mail to that address: follow its link to confirm the address, then sign in.",
   verified: "Your e-mail address is confirmed. You can sign in now.",
   "password-changed": "Password changed, and every session signed out. Sign in with the new one.",
   "signed-out": "You are signed out.",

@@ -20,6 +20,11 @@ export const RATE_LIMITS = {
   signInAddress: { limit: 50, windowMs: 15 * 60 * 1000 },
   resetAccount: { limit: 3, windowMs: 60 * 60 * 1000 },
   resetAddress: { limit: 20, windowMs: 60 * 60 * 1000 },
+  // Sign-up and invitations write mail to an address someone typed: cap both per address.
+  signUpAccount: { limit: 3, windowMs: 60 * 60 * 1000 },
+  signUpAddress: { limit: 10, windowMs: 60 * 60 * 1000 },
+  invitationActor: { limit: 30, windowMs: 60 * 60 * 1000 },
+  invitationEmail: { limit: 5, windowMs: 60 * 60 * 1000 },
 } satisfies Record<string, RateLimitRule>;
 
 /**

@@ -5,55 +5,95 @@ import { eq } from "drizzle-orm";
 import type { Db } from "@/db/client";
 import { emailVerificationTokens, users } from "@/db/schema/users";
 import { recordAudit } from "@/lib/server/access/audit";
+import { enforceRateLimits, RATE_LIMITS } from "@/lib/server/access/rate-limit";
 import { hashPassword } from "@/lib/server/accounts/auth/password";
 import { newToken } from "@/lib/server/accounts/auth/tokens";
+import { queueMail } from "@/lib/server/email/mail-outbox";
+import { signUpAttemptMessage } from "@/lib/server/email/templates/sign-up-attempt";
 import { verifyEmailMessage } from "@/lib/server/email/templates/verify";
 import { linkTo, type MailDeps } from "@/lib/shared/mail-types";
-import { AppError } from "@/lib/shared/errors";
 import { signUpSchema } from "@/lib/shared/validations/auth";
 import { parseInput } from "@/lib/shared/validations/parse";
 
 import { isUniqueViolation } from "./pg-errors";
 
-const DUPLICATE =
-  "An account with this e-mail address exists already. Sign in, or reset the password.";
-
-/** Creates an unverified account and mails the confirmation link. Does not sign in. */
-export async function signUp(db: Db, input: unknown, deps: MailDeps): Promise<{ userId: string }> {
+/**
+ * Creates an unverified account and queues the confirmation link. Does not sign in.
+ *
+ * The answer is the same whether the address has an account already: the form must not tell
+ * anyone who is registered. The owner of a known address gets a mail saying someone tried,
+ * and the work is alike both ways (the password is hashed, one mail is queued, never sent
+ * inline), so the time of the answer tells nothing either. `userId` is for callers inside the
+ * server only (null when the address was known); the page shows the same notice either way.
+ */
+export async function signUp(
+  db: Db,
+  input: unknown,
+  clientAddress: string,
+  deps: MailDeps,
+  now: Date = new Date(),
+): Promise<{ userId: string | null }> {
   const data = parseInput(signUpSchema, input);
-  const [existing] = await db
-    .select({ id: users.id })
-    .from(users)
-    .where(eq(users.email, data.email));
-  if (existing) throw new AppError("conflict:email", DUPLICATE, "email");
-
+  await enforceRateLimits(
+    db,
+    "sign-up",
+    [
+      { key: `sign-up:account:${data.email}`, rule: RATE_LIMITS.signUpAccount },
+      { key: `sign-up:address:${clientAddress}`, rule: RATE_LIMITS.signUpAddress },
+    ],
+    now,
+  );
   const { hash, salt } = await hashPassword(data.password);
-  const token = newToken("verification");
-  let userId: string;
+  const token = newToken("verification", now);
+  let userId: string | null;
   try {
     userId = await db.transaction(async (tx) => {
       const [user] = await tx
         .insert(users)
         .values({ email: data.email, name: data.name, passwordHash: hash, passwordSalt: salt })
+        .onConflictDoNothing({ target: users.email })
         .returning({ id: users.id });
+      if (!user) return null;
       await tx
         .insert(emailVerificationTokens)
         .values({ tokenHash: token.hash, userId: user.id, expiresAt: token.expiresAt });
       await recordAudit(tx, { actorId: user.id, action: "account.sign-up", target: data.email });
+      await queueMail(
+        tx,
+        verifyEmailMessage({
+          to: data.email,
+          name: data.name,
+          url: linkTo(deps.appUrl, `/verify/${token.token}`),
+        }),
+        now,
+      );
       return user.id;
     });
   } catch (error) {
-    // Two sign-ups racing for one address: the unique index decides, same message.
-    if (isUniqueViolation(error)) throw new AppError("conflict:email", DUPLICATE, "email");
-    throw error;
+    // A race the conflict clause did not absorb: treat it as the known-address case.
+    if (!isUniqueViolation(error)) throw error;
+    userId = null;
   }
-  // After commit: a mail failure leaves a valid account whose owner can ask for a new link.
-  await deps.mailer.send(
-    verifyEmailMessage({
-      to: data.email,
-      name: data.name,
-      url: linkTo(deps.appUrl, `/verify/${token.token}`),
-    }),
-  );
+  if (userId === null) await tellOwnerOfAttempt(db, data.email, deps, now);
+  deps.wakeOutbox?.();
   return { userId };
+}
+
+async function tellOwnerOfAttempt(db: Db, email: string, deps: MailDeps, now: Date) {
+  const [owner] = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(eq(users.email, email));
+  if (!owner) return;
+  await recordAudit(db, { actorId: owner.id, action: "account.sign-up-again", target: email });
+  await queueMail(
+    db,
+    signUpAttemptMessage({
+      to: email,
+      name: owner.name,
+      signInUrl: linkTo(deps.appUrl, "/sign-in"),
+      resetUrl: linkTo(deps.appUrl, "/reset"),
+    }),
+    now,
+  );
 }

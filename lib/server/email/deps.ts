@@ -11,5 +11,9 @@ import type { MailDeps } from "../../shared/mail-types";
 // The app's mailer: SMTP, with refused mail kept in mail_outbox and retried by the sender.
 export function mailDeps(): MailDeps {
   startMailOutbox();
-  return { mailer: durableMailer(getDb(), smtpMailer, startMailOutbox), appUrl: getEnv().APP_URL };
+  return {
+    mailer: durableMailer(getDb(), smtpMailer, startMailOutbox),
+    appUrl: getEnv().APP_URL,
+    wakeOutbox: startMailOutbox,
+  };
 }

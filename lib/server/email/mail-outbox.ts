@@ -2,7 +2,7 @@ import "server-only";
 
 import { and, asc, eq, isNull, lte, sql } from "drizzle-orm";
 
-import type { Db } from "@/db/client";
+import type { Db, Executor } from "@/db/client";
 import { mailOutbox } from "@/db/schema/mail-outbox";
 
 import type { Mailer, MailMessage, MailSendResult } from "../../shared/mail-types";
@@ -40,6 +40,15 @@ export function durableMailer(db: Db, transport: Mailer, onQueued?: () => void):
       }
     },
   };
+}
+
+/**
+ * Puts a message in the outbox, due at once, without touching SMTP: the sender delivers it
+ * after the request has answered. Account mail (sign-up, reset) goes this way so the answer
+ * takes the same time whether or not a mail was written.
+ */
+export async function queueMail(db: Executor, message: MailMessage, now = new Date()) {
+  await db.insert(mailOutbox).values({ ...message, attempts: 0, nextAttemptAt: now });
 }
 
 /**

@@ -16,6 +16,7 @@ import { AppError } from "@/lib/shared/errors";
 import { inviteSchema } from "@/lib/shared/validations/teams";
 import { parseInput } from "@/lib/shared/validations/parse";
 
+import { enforceRateLimits, RATE_LIMITS } from "../access/rate-limit";
 import { authorizeTeam } from "../access/team-access";
 
 /** Invites an address with a role; a new invitation to the same address replaces the open one. */
@@ -41,6 +42,16 @@ export async function inviteMember(
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(and(eq(memberships.teamId, ctx.team.id), eq(users.email, data.email)));
   if (already) throw new AppError("conflict:member", "This person is a member already.", "email");
+  // Each invitation mails an address someone typed: cap it per inviter and per address.
+  await enforceRateLimits(
+    db,
+    "invitation",
+    [
+      { key: `invitation:actor:${ctx.actor.id}`, rule: RATE_LIMITS.invitationActor },
+      { key: `invitation:email:${data.email}`, rule: RATE_LIMITS.invitationEmail },
+    ],
+    now,
+  );
 
   const token = newToken("invitation", now);
   const invitation = await db.transaction(async (tx) => {

@@ -1,8 +1,10 @@
 import { randomBytes } from "node:crypto";
 
+import { asc, eq } from "drizzle-orm";
 import { afterAll } from "vitest";
 
 import { createDb, requireDatabaseUrl, type Db } from "@/db/client";
+import { mailOutbox } from "@/db/schema/mail-outbox";
 import { users } from "@/db/schema/users";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { hashPassword } from "@/lib/server/accounts/auth/password";
@@ -52,6 +54,16 @@ export function recordingMailer(): MailDeps & { sent: MailMessage[] } {
       },
     },
   };
+}
+
+/** Mail the services queued for one address (account mail goes through the outbox), oldest first. */
+export async function queuedMailTo(db: Db, to: string): Promise<MailMessage[]> {
+  const rows = await db
+    .select()
+    .from(mailOutbox)
+    .where(eq(mailOutbox.to, to.toLowerCase()))
+    .orderBy(asc(mailOutbox.createdAt));
+  return rows.map((r) => ({ to: r.to, subject: r.subject, text: r.text, html: r.html }));
 }
 
 export function tokenFromLink(message: MailMessage | undefined, path: string): string {
