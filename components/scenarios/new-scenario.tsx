@@ -7,6 +7,7 @@ import { Workbench } from "@/components/workbench/workbench";
 import { defaultScenario } from "@/lib/client/workbench/default-scenario";
 import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
 import { messageOf } from "@/lib/client/data/api-fetch";
+import { useLibraryChoices } from "@/lib/client/data/use-library-choices";
 import { teamPages } from "@/lib/client/data/api-urls";
 import { parseTags } from "@/lib/client/data/tags";
 import { useCreateScenario } from "@/lib/client/data/use-save-revision";
@@ -27,6 +28,7 @@ function starter(): ScenarioFileJson {
 export function NewScenario({ slug }: NewScenarioProps) {
   const router = useRouter();
   const create = useCreateScenario(slug);
+  const library = useLibraryChoices(slug);
   const [initial] = useState(starter);
   const [material, setMaterial] = useState("");
   const [tags, setTags] = useState("");
@@ -83,7 +85,7 @@ export function NewScenario({ slug }: NewScenarioProps) {
           />
         </div>
       ) : null}
-      <Workbench initialScenario={initial} onSave={(f) => setPending(f)} />
+      <Workbench library={library} initialScenario={initial} onSave={(f) => setPending(f)} />
     </div>
   );
 }
