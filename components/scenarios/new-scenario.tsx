@@ -4,9 +4,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 
 import { Workbench } from "@/components/workbench/workbench";
+import { checkScenario } from "@/lib/client/sets/check-scenario";
 import { defaultScenario } from "@/lib/client/workbench/default-scenario";
+import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
 import { messageOf } from "@/lib/client/data/api-fetch";
+import { useLibraryChoices } from "@/lib/client/data/use-library-choices";
 import { teamPages } from "@/lib/client/data/api-urls";
 import { parseTags } from "@/lib/client/data/tags";
 import { useCreateScenario } from "@/lib/client/data/use-save-revision";
@@ -15,19 +18,26 @@ import { SaveRevisionForm } from "./save-revision-form";
 
 export interface NewScenarioProps {
   slug: string;
+  /** A library set to check ("Check in a new scenario" on a fit's page). */
+  checkSet?: { name: string; values: object };
 }
 
 const INPUT = "mt-1 block w-full rounded-md border border-glaze-line bg-white px-3 py-1.5 text-sm";
 
-function starter(): ScenarioFileJson {
+function starter(checkSet: NewScenarioProps["checkSet"]): ScenarioFileJson {
+  if (checkSet) {
+    const { id: _id, ...values } = checkSet.values as Record<string, unknown>;
+    return checkScenario({ ...values, label: checkSet.name } as Omit<ParameterSet, "id">);
+  }
   return { ...defaultScenario(), name: "New scenario" };
 }
 
 /** The workbench on the starting template; saving creates the scenario with revision 1. */
-export function NewScenario({ slug }: NewScenarioProps) {
+export function NewScenario({ slug, checkSet }: NewScenarioProps) {
   const router = useRouter();
   const create = useCreateScenario(slug);
-  const [initial] = useState(starter);
+  const library = useLibraryChoices(slug);
+  const [initial] = useState(() => starter(checkSet));
   const [material, setMaterial] = useState("");
   const [tags, setTags] = useState("");
   const [pending, setPending] = useState<ScenarioFileJson | null>(null);
@@ -83,7 +93,7 @@ export function NewScenario({ slug }: NewScenarioProps) {
           />
         </div>
       ) : null}
-      <Workbench initialScenario={initial} onSave={(f) => setPending(f)} />
+      <Workbench library={library} initialScenario={initial} onSave={(f) => setPending(f)} />
     </div>
   );
 }

@@ -6,6 +6,7 @@ import { useState } from "react";
 import { Workbench } from "@/components/workbench/workbench";
 import type { OpenedScenario, ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
 import { messageOf } from "@/lib/client/data/api-fetch";
+import { useLibraryChoices } from "@/lib/client/data/use-library-choices";
 import { teamPages } from "@/lib/client/data/api-urls";
 import { type SaveConflict, saveConflictOf } from "@/lib/client/data/conflict";
 import { useSaveRevision } from "@/lib/client/data/use-save-revision";
@@ -35,6 +36,7 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
   // Which test records are drawn over the charts: a way of looking, not part of the revision.
   const [recordIds, setRecordIds] = useState<string[]>([]);
   const records = useRecordOverlays(slug, recordIds);
+  const library = useLibraryChoices(slug);
 
   const submit = (base: number, text: string) => {
     if (!pending) return;
@@ -104,6 +106,7 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
         />
       </div>
       <Workbench
+        library={library}
         initialScenario={file}
         readOnly={!editable}
         onSave={editable ? (f) => setPending(f) : undefined}

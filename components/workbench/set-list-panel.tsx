@@ -1,8 +1,8 @@
 "use client";
 
-import { useState } from "react";
 import { useDrawVersion } from "@/components/charts/use-draw-version";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { SetPicker } from "@/components/set-picker/set-picker";
+import type { LibraryChoice } from "@/lib/client/sets/library-choice";
 import { MAX_SETS } from "@/lib/client/workbench/set-colors";
 import type { SetAction, SetEntry } from "@/lib/client/workbench/set-list";
 import type { ResultsStore } from "@/lib/client/workbench/results-store";
@@ -14,6 +14,8 @@ export interface SetListPanelProps {
   store: ResultsStore;
   onSelect: (id: string) => void;
   dispatch: (a: SetAction) => void;
+  /** Team library sets offered beside the presets. */
+  library?: readonly LibraryChoice[];
 }
 
 const small =
@@ -38,8 +40,8 @@ export function SetListPanel({
   store,
   onSelect,
   dispatch,
+  library,
 }: SetListPanelProps) {
-  const [preset, setPreset] = useState(PRESETS[0].key);
   // Re-render with the run status (computing, increments, failure) as results arrive.
   useDrawVersion(store);
   const full = entries.length >= MAX_SETS;
@@ -114,33 +116,11 @@ export function SetListPanel({
         })}
       </ul>
       {!readOnly && (
-        <div className="mt-2 flex items-center gap-1">
-          <label htmlFor="preset-pick" className="sr-only">
-            Preset for a new set
-          </label>
-          <select
-            id="preset-pick"
-            value={preset}
-            onChange={(e) => setPreset(e.target.value)}
-            className="min-w-0 flex-1 rounded border border-glaze-line bg-white px-2 py-1 text-sm"
-          >
-            {PRESETS.map((p) => (
-              <option key={p.key} value={p.key}>
-                {p.name}
-              </option>
-            ))}
-          </select>
-          <button
-            type="button"
-            disabled={full}
-            onClick={() =>
-              dispatch({ type: "add", params: PRESETS.find((p) => p.key === preset)!.params })
-            }
-            className="rounded-md bg-verdigris px-3 py-1 text-sm text-white hover:bg-verdigris-dark disabled:opacity-50"
-          >
-            Add set
-          </button>
-        </div>
+        <SetPicker
+          library={library}
+          disabled={full}
+          onAdd={(params) => dispatch({ type: "add", params })}
+        />
       )}
       <p className="mt-1 text-xs text-ink-faint">
         Up to {MAX_SETS} sets. Presets are invented demonstration materials, not data of any real

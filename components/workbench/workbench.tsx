@@ -5,6 +5,7 @@ import { useCallback, useMemo, useReducer, useState } from "react";
 import { Panel } from "@/components/ui/panel";
 import { expandPathDoc } from "@/lib/scenario/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
+import type { LibraryChoice } from "@/lib/client/sets/library-choice";
 import type { ChartOverlay } from "@/lib/client/workbench/chart-overlays";
 import {
   fromScenario,
@@ -40,6 +41,8 @@ export interface WorkbenchProps {
   syncUrl?: boolean;
   /** Measured curves drawn over the chart whose axes they match (test records); not saved. */
   overlays?: readonly ChartOverlay[];
+  /** Team library sets the set picker offers beside the presets. */
+  library?: readonly LibraryChoice[];
 }
 
 export function Workbench({
@@ -48,6 +51,7 @@ export function Workbench({
   onSave,
   syncUrl,
   overlays,
+  library,
 }: WorkbenchProps) {
   const [m, dispatch] = useReducer(workbenchReducer, initialScenario, (s) =>
     initModel(fromScenario(s)),
@@ -130,6 +134,7 @@ export function Workbench({
               store={store}
               onSelect={(id) => dispatch({ type: "select", id })}
               dispatch={(action) => dispatch({ type: "sets", action })}
+              library={library}
             />
           </Panel>
           <Panel id="values" title={`Values of set ${active.set.id}`} aside={active.set.label}>

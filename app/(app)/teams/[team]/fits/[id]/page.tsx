@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 
 import { DesignCaution } from "@/components/calibration/design-caution";
@@ -8,6 +9,8 @@ import { ParamsTable } from "@/components/calibration/params-table";
 import { getDb } from "@/db/index";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { isAppError } from "@/lib/shared/errors";
+import { can } from "@/lib/shared/permissions";
+import { teamPages } from "@/lib/client/data/api-urls";
 import { getFit } from "@/lib/server/records/fits";
 
 import { TeamNav } from "../../team-nav";
@@ -37,6 +40,19 @@ export default async function FitPage({
         {fit.method === "identify" ? "Identification per spec E" : "Levenberg–Marquardt refinement"}
         , {fit.createdAt.slice(0, 10)} by {fit.createdBy?.name ?? "former member"}
       </p>
+      {fit.parameterSetId && can(ctx.role, "scenario:edit") ? (
+        <p className="mt-3">
+          <Link
+            href={`${teamPages(ctx.team.slug).newScenario}?set=${fit.parameterSetId}`}
+            className="inline-block rounded-md bg-verdigris px-3 py-1.5 text-sm text-white hover:bg-verdigris-dark"
+          >
+            Check in a new scenario
+          </Link>{" "}
+          <span className="text-sm text-ink-soft">
+            tension → unload → compression and growing cycles, paths the coupons did not cover
+          </span>
+        </p>
+      ) : null}
       <div className="mt-4">
         <DesignCaution />
       </div>
