@@ -78,6 +78,9 @@ export function CalibrationWorkspace({
       {estimate ? (
         <p className="text-sm text-ink-soft">
           Starting values: E1 {estimate.E1.toFixed(0)} MPa, E2 {estimate.E2.toFixed(0)} MPa
+          {estimate.thetaD !== undefined
+            ? `, damage frame ${estimate.thetaD.toFixed(1)}°`
+            : ""}{" "}
           (estimates from constituents).
         </p>
       ) : null}

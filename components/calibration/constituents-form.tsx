@@ -3,10 +3,14 @@
 import { useState } from "react";
 
 import { Button } from "@/components/ui/button";
+import { alignedPly, type Constituents } from "@/lib/calibration/micromechanics/halpin-tsai";
 import { elasticStart, type Layout } from "@/lib/calibration/micromechanics/starting-values";
 import { volumeFraction } from "@/lib/calibration/micromechanics/volume-fraction";
 
-export type ElasticEstimate = ReturnType<typeof elasticStart>;
+import { OrientationSection, type OrientedEstimate } from "./orientation-section";
+
+/** Elastic starting values; an orientation state also gives the damage frame thetaD. */
+export type ElasticEstimate = ReturnType<typeof elasticStart> & { thetaD?: number };
 
 const FIELDS = [
   ["Ef", "Fibre modulus Ef (MPa)", "72000"],
@@ -20,7 +24,11 @@ const FIELDS = [
 ] as const;
 
 /** Halpin–Tsai ply, planar-random average or aligned: elastic starting values, not results. */
-export function ConstituentsForm({ onUse }: { onUse: (e: ElasticEstimate) => void }) {
+export function ConstituentsForm({
+  onUse,
+}: {
+  onUse: (e: ElasticEstimate, provenance?: OrientedEstimate["provenance"]) => void;
+}) {
   const [values, setValues] = useState<Record<string, string>>(
     Object.fromEntries(FIELDS.map(([k, , d]) => [k, d])),
   );
@@ -28,12 +36,10 @@ export function ConstituentsForm({ onUse }: { onUse: (e: ElasticEstimate) => voi
   const n = (k: string) => Number(values[k]);
   const Vf = volumeFraction(n("wf"), n("rhoF"), n("rhoM"));
   const valid = FIELDS.every(([k]) => Number.isFinite(n(k)) && n(k) > 0) && Vf > 0 && Vf < 1;
-  const estimate = valid
-    ? elasticStart(
-        { Ef: n("Ef"), nuf: n("nuf"), Em: n("Em"), num: n("num"), Vf, aspect: n("aspect") },
-        layout,
-      )
+  const constituents: Constituents | null = valid
+    ? { Ef: n("Ef"), nuf: n("nuf"), Em: n("Em"), num: n("num"), Vf, aspect: n("aspect") }
     : null;
+  const estimate = constituents ? elasticStart(constituents, layout) : null;
   return (
     <details className="rounded-lg border border-glaze-line bg-white/70 p-4">
       <summary className="cursor-pointer text-sm font-medium">
@@ -85,6 +91,11 @@ export function ConstituentsForm({ onUse }: { onUse: (e: ElasticEstimate) => voi
       >
         Use as starting values
       </Button>
+      <OrientationSection
+        ply={constituents ? alignedPly(constituents) : null}
+        constituents={constituents}
+        onUse={({ provenance, ...values }) => onUse(values, provenance)}
+      />
     </details>
   );
 }

@@ -8,6 +8,7 @@ import { z } from "zod";
 
 import { createApiTokenSchema } from "@/lib/server/accounts/api-tokens/schema";
 import { conformanceUploadSchema } from "@/lib/server/handoff/conformance/upload-schema";
+import { orientationRequestSchema } from "@/lib/calibration/micromechanics/orientation-request";
 import { runRequestSchema } from "@/lib/server/handoff/runs/run-request";
 import { scenarioFileSchema } from "@/lib/scenario/scenario-schema";
 import { studyRequestSchema } from "@/lib/server/handoff/studies/schema";
@@ -42,6 +43,7 @@ export function componentSchemas(): Record<string, JsonSchema> {
       },
     },
     StudyRequest: fromZod(studyRequestSchema),
+    OrientationRequest: fromZod(orientationRequestSchema),
     ConformanceUpload: fromZod(conformanceUploadSchema),
     ApiTokenRequest: fromZod(createApiTokenSchema),
     Error: fromZod(errorSchema),

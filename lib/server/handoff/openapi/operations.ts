@@ -68,6 +68,26 @@ export const OPERATIONS: Record<string, Record<string, Op>> = {
       },
     },
   },
+  "/orientation": {
+    post: {
+      operationId: "computeOrientationState",
+      summary:
+        "In-plane stiffness and damage frame of a moulded layer stack from its orientation tensors",
+      description:
+        "For each layer (thickness fraction, planar orientation tensor a11, a12 with a22 = 1 − a11) and the stack: principal direction thetaA, order parameter s, E1, E2, nu12, G12 and the damage frame thetaD, from the aligned ply (typed in or by Halpin–Tsai from constituents) averaged through the Tsai–Pagano invariants with the chosen closure. With cutAngle φ, couponThetaD = thetaA − φ. Any role. Starting values only: the orientation state comes from a mould-filling simulation or a scan, and the result is no design allowable.",
+      requestBody: { required: true, content: json(ref("OrientationRequest")) },
+      responses: {
+        "200": {
+          description:
+            "closure, ply, layers (per layer: fraction, a11, a12, thetaA, s, E1, E2, nu12, G12, thetaD), stack (E1, E2, nu12, G12, thetaD), stiffness (A/h in x–y axes, MPa), couponThetaD, caution",
+          content: json({ type: "object" }),
+        },
+        "400": err("The body is not JSON, or a field is out of range (the message names it)"),
+        "413": err("A body over 64 KB"),
+        ...COMMON,
+      },
+    },
+  },
   "/teams/{team}/scenarios": {
     get: {
       operationId: "listScenarios",
