@@ -193,7 +193,9 @@ describe("properties (fast-check)", () => {
           const q = layerStiffness(U, tensorOf(thetaA, order), c);
           const plus = modulusAlong(q, thetaA + psi);
           const minus = modulusAlong(q, thetaA - psi);
-          if (plus > 0 && minus > 0) rel(plus, minus, 1e-9);
+          // 1e-8: the two directions go through different trigonometric round-off (angles up
+          // to ±270°); a broken symmetry would differ at the percent level.
+          if (plus > 0 && minus > 0) rel(plus, minus, 1e-8);
           // continuity: a small change of direction changes E by a small amount
           const h = 1e-6;
           const near = modulusAlong(q, thetaA + psi + h);
