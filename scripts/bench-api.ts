@@ -10,6 +10,7 @@ import path from "node:path";
 
 import { createDb, requireDatabaseUrl } from "@/db/client";
 import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
+import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 
 import { measure } from "./bench-api-measure";
 import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";
@@ -62,7 +63,7 @@ async function main() {
     const lucia = createLucia(db, { secureCookies: false });
     const cookies: string[] = [];
     for (const userId of seed.userIds) {
-      cookies.push(`${SESSION_COOKIE}=${(await lucia.createSession(userId, {})).id}`);
+      cookies.push(`${SESSION_COOKIE}=${(await createSessionToken(lucia, userId)).token}`);
     }
     const cookie = cookies[0];
     let sent = 0;

@@ -5,6 +5,7 @@ import { sql } from "drizzle-orm";
 
 import type { Db } from "@/db/client";
 import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
+import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { hashPassword } from "@/lib/server/accounts/auth/password";
 
 export interface LoadSeed {
@@ -49,6 +50,6 @@ export async function seedLoad(db: Db, clients: number): Promise<LoadSeed> {
   const lucia = createLucia(db, { secureCookies: false });
   const cookies: string[] = [];
   for (const id of editors)
-    cookies.push(`${SESSION_COOKIE}=${(await lucia.createSession(id, {})).id}`);
+    cookies.push(`${SESSION_COOKIE}=${(await createSessionToken(lucia, id)).token}`);
   return { teamSlug: slug, cookies, scenarioIds: editors.map((id) => byAuthor.get(id)!) };
 }

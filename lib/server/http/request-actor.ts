@@ -3,6 +3,7 @@ import "server-only";
 import { getDb } from "@/db/index";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { actorFromUser, createLucia, type AppLucia } from "@/lib/server/accounts/auth/lucia";
+import { validateSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { isHttpsApp } from "@/lib/server/access/env";
 
 let lucia: AppLucia | undefined;
@@ -21,13 +22,13 @@ export async function actorFromRequest(
   request: Request,
 ): Promise<{ actor: Actor; setCookie?: string }> {
   const auth = apiLucia();
-  const sessionId = auth.readSessionCookie(request.headers.get("cookie") ?? "");
-  if (!sessionId) return { actor: null };
-  const { session, user } = await auth.validateSession(sessionId);
+  const token = auth.readSessionCookie(request.headers.get("cookie") ?? "");
+  if (!token) return { actor: null };
+  const { session, user } = await validateSessionToken(auth, token);
   if (!session) return { actor: null, setCookie: auth.createBlankSessionCookie().serialize() };
   return {
     actor: actorFromUser(user),
-    setCookie: session.fresh ? auth.createSessionCookie(session.id).serialize() : undefined,
+    setCookie: session.fresh ? auth.createSessionCookie(token).serialize() : undefined,
   };
 }
 

@@ -6,6 +6,7 @@ import { users } from "@/db/schema/users";
 import { requestPasswordReset, resetPassword } from "@/lib/server/accounts/password-reset";
 import { authenticate } from "@/lib/server/accounts/sign-in";
 import { createLucia } from "@/lib/server/accounts/auth/lucia";
+import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { RATE_LIMITS } from "@/lib/server/access/rate-limit";
 
 import {
@@ -31,8 +32,8 @@ describe("password reset", () => {
   it("sets the new password, ends every session, and the old password stops working", async () => {
     const user = await makeUser(db);
     const lucia = createLucia(db, { secureCookies: false });
-    await lucia.createSession(user.id, {});
-    await lucia.createSession(user.id, {});
+    await createSessionToken(lucia, user.id);
+    await createSessionToken(lucia, user.id);
     const token = await requestToken(user.email);
     await resetPassword(db, { token, password: NEW_PASSWORD, confirm: NEW_PASSWORD });
     expect(await db.select().from(sessions).where(eq(sessions.userId, user.id))).toHaveLength(0);

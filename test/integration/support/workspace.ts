@@ -6,6 +6,7 @@ import { afterAll } from "vitest";
 import type { Db } from "@/db/client";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
+import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { addComment } from "@/lib/server/workspace/comments";
 import { createParameterSet } from "@/lib/server/workspace/parameter-sets";
 import { createScenario } from "@/lib/server/workspace/scenarios";
@@ -71,8 +72,9 @@ export async function makeWorld(db: Db): Promise<World> {
 /** A session cookie header for the actor, made through lucia like a real sign-in. */
 export async function cookieFor(db: Db, actor: SignedInActor | null): Promise<string | undefined> {
   if (!actor) return undefined;
-  const session = await createLucia(db, { secureCookies: false }).createSession(actor.id, {});
-  return `${SESSION_COOKIE}=${session.id}`;
+  const lucia = createLucia(db, { secureCookies: false });
+  const { token } = await createSessionToken(lucia, actor.id);
+  return `${SESSION_COOKIE}=${token}`;
 }
 
 type Handler = (request: Request, context: { params: Promise<never> }) => Promise<Response>;

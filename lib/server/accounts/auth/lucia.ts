@@ -6,12 +6,15 @@ import { sessions } from "@/db/schema/sessions";
 import { users } from "@/db/schema/users";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 
+import { SESSION_IDLE_DAYS } from "./session-token";
+
 // Free of Next imports so tests and scripts can build one on their own handle.
 export const SESSION_COOKIE = "craq_session";
 
 export function createLucia(db: Db, options: { secureCookies: boolean }) {
   return new Lucia(new DrizzlePostgreSQLAdapter(db, sessions, users), {
-    sessionExpiresIn: new TimeSpan(30, "d"),
+    // Idle limit (slides with use); the absolute limit is checked in session-token.ts.
+    sessionExpiresIn: new TimeSpan(SESSION_IDLE_DAYS, "d"),
     sessionCookie: {
       name: SESSION_COOKIE,
       expires: true,
@@ -20,6 +23,7 @@ export function createLucia(db: Db, options: { secureCookies: boolean }) {
     },
     // Only these columns leave the database with a session; never the password hash.
     getUserAttributes: (row) => ({ email: row.email, name: row.name, verifiedAt: row.verifiedAt }),
+    getSessionAttributes: (row) => ({ signedInAt: row.signedInAt }),
   });
 }
 export type AppLucia = ReturnType<typeof createLucia>;
@@ -28,6 +32,7 @@ declare module "lucia" {
   interface Register {
     Lucia: AppLucia;
     DatabaseUserAttributes: { email: string; name: string; verifiedAt: Date | null };
+    DatabaseSessionAttributes: { signedInAt: Date };
   }
 }
 

@@ -8,6 +8,7 @@ import type { Actor } from "@/lib/server/accounts/actor";
 import { isHttpsApp } from "@/lib/server/access/env";
 
 import { actorFromUser, createLucia, SESSION_COOKIE, type AppLucia } from "./lucia";
+import { createSessionToken, validateSessionToken } from "./session-token";
 
 let instance: AppLucia | undefined;
 
@@ -20,15 +21,15 @@ export function getLucia(): AppLucia {
 export const getCurrentSession = cache(async () => {
   // cookies() first: it marks the render dynamic, so `next build` never reaches the database.
   const store = await cookies();
-  const sessionId = store.get(SESSION_COOKIE)?.value ?? null;
-  if (!sessionId) return { user: null, session: null };
+  const token = store.get(SESSION_COOKIE)?.value ?? null;
+  if (!token) return { user: null, session: null };
   const lucia = getLucia();
-  const result = await lucia.validateSession(sessionId);
+  const result = await validateSessionToken(lucia, token);
   // Server Components may not set cookies; actions and route handlers may. Refreshing is a
   // nicety, so a refusal here is ignored and the next action will refresh instead.
   try {
     if (result.session?.fresh) {
-      const cookie = lucia.createSessionCookie(result.session.id);
+      const cookie = lucia.createSessionCookie(token);
       store.set(cookie.name, cookie.value, cookie.attributes);
     }
     if (!result.session) {
@@ -49,8 +50,8 @@ export async function getActor(): Promise<Actor> {
 /** Call from actions only. */
 export async function startSession(userId: string): Promise<void> {
   const lucia = getLucia();
-  const session = await lucia.createSession(userId, {});
-  const cookie = lucia.createSessionCookie(session.id);
+  const { token } = await createSessionToken(lucia, userId);
+  const cookie = lucia.createSessionCookie(token);
   (await cookies()).set(cookie.name, cookie.value, cookie.attributes);
 }
 

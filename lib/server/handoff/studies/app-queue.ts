@@ -5,6 +5,8 @@ import type PgBoss from "pg-boss";
 import { requireDatabaseUrl } from "@/db/client";
 import { getDb } from "@/db/index";
 
+import { registerMaintenanceJobs } from "@/lib/server/maintenance/jobs";
+
 import { openStudyQueue } from "./queue";
 import { startStudyWorker } from "./worker";
 
@@ -23,4 +25,6 @@ export function getStudyQueue(): Promise<PgBoss> {
 export async function startAppStudyWorker(): Promise<void> {
   const boss = await getStudyQueue();
   await startStudyWorker(boss, getDb());
+  // Hourly cleanup of expired sessions, old rate-limit windows and sent mail (issue 12).
+  await registerMaintenanceJobs(boss, getDb());
 }
