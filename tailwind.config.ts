@@ -10,6 +10,8 @@ const config: Config = {
         glaze: { DEFAULT: "#f7f3ea", deep: "#ece5d6", line: "#d9cfbb" },
         kiln: { DEFAULT: "#b4532a", dark: "#8c3d1d", light: "#f3d9cb" },
         verdigris: { DEFAULT: "#2f7a74", dark: "#225a55", light: "#d3ebe8" },
+        // Soft warnings (plausible-range notes): a glaze ochre, readable on cream.
+        ochre: { DEFAULT: "#c08a12", dark: "#7a5608", light: "#f5e6c4" },
       },
       fontFamily: {
         display: ["var(--font-display)", "system-ui", "sans-serif"],

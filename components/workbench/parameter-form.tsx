@@ -5,6 +5,7 @@ import { useEffect } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { PARAMETER_FIELDS, type ParameterField } from "@/lib/scenario/parameter-fields";
 import { rangeFor, unitFor } from "@/lib/client/workbench/field-text";
+import { plausibilityWarnings } from "@/lib/scenario/plausibility";
 import {
   type ParameterSet,
   type ParameterSetInput,
@@ -48,13 +49,23 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
   });
   const { errors } = form.formState;
   const law = String(useWatch({ control: form.control, name: "law" }) ?? "sqrtY");
+  const values = useWatch({ control: form.control }) as Record<string, unknown>;
+  const found = plausibilityWarnings(values);
+  const warnings = new Map(found.map((w) => [w.field, w.message]));
+  const invalid = [
+    ...Object.keys(errors),
+    ...found.filter((w) => w.severity === "implausible").map((w) => w.field),
+  ];
 
   useEffect(() => {
     return form.subscribe({
       formState: { values: true },
       callback: ({ values }) => {
         const parsed = parameterSetSchema.safeParse(values);
-        if (parsed.success) onValid({ ...parsed.data, label: set.label });
+        const implausible = plausibilityWarnings(values as Record<string, unknown>).some(
+          (w) => w.severity === "implausible",
+        );
+        if (parsed.success && !implausible) onValid({ ...parsed.data, label: set.label });
       },
     });
   }, [form, onValid, set.label]);
@@ -66,6 +77,12 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
       aria-label={`Values of set ${set.id}`}
       className="space-y-3"
     >
+      {invalid.length > 0 ? (
+        <p role="status" className="rounded border border-kiln bg-kiln-light/40 px-2 py-1 text-xs">
+          {invalid.join(", ")} {invalid.length === 1 ? "needs" : "need"} a valid value: the charts
+          show the last valid values of set {set.id} until then.
+        </p>
+      ) : null}
       {GROUPS.map((g) => (
         <fieldset key={g.title} disabled={readOnly} className="space-y-1">
           <legend className="text-xs font-semibold uppercase tracking-wide text-ink-faint">
@@ -78,6 +95,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
               const error = (errors as Record<string, { message?: string } | undefined>)[symbol]
                 ?.message;
               const name = symbol as keyof ParameterSetInput;
+              const warning = error ? undefined : warnings.get(symbol);
               return (
                 <div key={symbol} className="min-w-0">
                   <label
@@ -120,6 +138,11 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                   >
                     {error ? `${symbol} ${error}` : rangeFor(f, law)}
                   </p>
+                  {warning ? (
+                    <p className="mt-0.5 text-xs text-ochre-dark" data-testid={`${id}-warning`}>
+                      {warning}
+                    </p>
+                  ) : null}
                 </div>
               );
             })}

@@ -9,7 +9,16 @@
 export interface PlausibilityWarning {
   field: string;
   message: string;
+  /**
+   * "implausible": more than a thousand times outside the usual range (1e308, a unit slip of
+   * 10^6). The desk keeps showing the last plausible curves rather than plot it; files and the
+   * API still accept it, since the law admits it.
+   */
+  severity: "unusual" | "implausible";
 }
+
+/** How far outside the usual range a value must be before the desk stops plotting it. */
+const IMPLAUSIBLE_FACTOR = 1000;
 
 interface UsualRange {
   field: string;
@@ -42,9 +51,15 @@ export function plausibilityWarnings(set: Record<string, unknown>): Plausibility
     if (typeof value !== "number" || !Number.isFinite(value)) continue;
     if (value >= range.low && value <= range.high) continue;
     const usual = `${formatBound(range.low, range.unit)} to ${formatBound(range.high, range.unit)}`;
+    const implausible =
+      value < range.low / IMPLAUSIBLE_FACTOR || value > range.high * IMPLAUSIBLE_FACTOR;
+    const given = `${range.field} = ${value}${range.unit ? ` ${range.unit}` : ""}`;
     warnings.push({
       field: range.field,
-      message: `${range.field} = ${value}${range.unit ? ` ${range.unit}` : ""} is outside the usual ${usual} (${range.why}). Check the unit and the exponent; the run goes ahead.`,
+      severity: implausible ? "implausible" : "unusual",
+      message: implausible
+        ? `${given} is far outside the usual ${usual} (${range.why}). Type the value in ${range.unit || "the unit shown"}; the charts keep the last plausible values.`
+        : `${given} is outside the usual ${usual} (${range.why}). Check the unit and the exponent; the run goes ahead.`,
     });
   }
   return warnings;

@@ -16,6 +16,12 @@ describe("plausibility warnings", () => {
     expect(warning.field).toBe("E1");
     expect(warning.message).toContain("E1 = 1e+308 MPa");
     expect(warning.message).toContain("100 MPa to 500 GPa");
+    expect(warning.severity).toBe("implausible");
+  });
+
+  it("tell an unusual value (runs) from an implausible one (not plotted)", () => {
+    expect(plausibilityWarnings({ ...DEMO, E1: 800_000 })[0].severity).toBe("unusual");
+    expect(plausibilityWarnings({ ...DEMO, E1: 0.05 })[0].severity).toBe("implausible");
   });
 
   it("catch a modulus typed in GPa where MPa is meant", () => {

@@ -42,3 +42,34 @@ describe("parameter form", () => {
     expect(screen.getByText("> 0 and 2·a1·Y0_1 < 1")).toBeTruthy();
   });
 });
+
+describe("parameter form: bad E1 values keep the last valid curves", () => {
+  const notice = /E1 needs a valid value: the charts show the last valid values of set A/;
+
+  for (const [typed, message] of [
+    ["", /E1 /],
+    ["abc", /E1 must be a finite number/],
+    ["-5", /E1 must be > 0/],
+    ["1e308", /E1 = 1e\+308 MPa is far outside the usual 100 MPa to 500 GPa/],
+  ] as const) {
+    it(`"${typed}" names E1, says the charts keep the last valid values and passes nothing on`, async () => {
+      const onValid = vi.fn();
+      render(<ParameterForm set={set} onValid={onValid} />);
+      fireEvent.change(screen.getByLabelText(/^E1/), { target: { value: typed } });
+      await waitFor(() => expect(screen.getByText(notice)).toBeTruthy());
+      expect(screen.getAllByText(message).length).toBeGreaterThan(0);
+      expect(onValid).not.toHaveBeenCalled();
+    });
+  }
+
+  it("an unusual but plausible E1 runs, with a note naming E1", async () => {
+    const onValid = vi.fn();
+    render(<ParameterForm set={set} onValid={onValid} />);
+    fireEvent.change(screen.getByLabelText(/^E1/), { target: { value: "800000" } });
+    await waitFor(() =>
+      expect(onValid).toHaveBeenCalledWith(expect.objectContaining({ E1: 800000 })),
+    );
+    expect(screen.getByText(/E1 = 800000 MPa is outside the usual/)).toBeTruthy();
+    expect(screen.queryByText(notice)).toBeNull();
+  });
+});
