@@ -151,8 +151,7 @@ async function main() {
     console.log(
       `machine: ${os.cpus().length} cores, load average ${load} (shared with other work)`,
     );
-    const ratio = (x: number) =>
-      (Math.round((x / Math.max(0.1, floor.p95)) * 100) / 100).toFixed(2);
+    const ratio = (x: number) => (Math.round((x / Math.max(0.1, floor.p95)) * 100) / 100).toFixed(2);
     console.log(
       `goals: list_ratio <= 1.5, save_ratio <= 2.5, list_cpu <= 2 ms, save_cpu <= 3 ms, errors 0 (${CONNECTIONS} connections, ${SECONDS} s each, loopback)`,
     );
