@@ -1,5 +1,5 @@
 /** One autocannon phase with its own p95 (autocannon reports p90 and p97.5, not p95). */
-import { readdirSync, readFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 
 import autocannon from "autocannon";
 
@@ -12,26 +12,18 @@ export interface Phase {
   p99: number;
   errors: number;
   statuses: Record<number, number>;
-  /** CPU all app processes spent per request (Linux /proc), independent of other load. */
+  /** CPU the app process spent per request (Linux /proc), independent of other load. */
   serverCpuMs: number;
 }
 
-/**
- * user + system CPU time in ms of every live process in the app's process group (the balancer
- * and each app process), from /proc (clock ticks of 10 ms).
- */
-function cpuMsOf(groupId: number | undefined): number {
-  if (!groupId) return NaN;
-  let total = 0;
-  for (const entry of readdirSync("/proc")) {
-    if (!/^\d+$/.test(entry)) continue;
-    try {
-      const fields = readFileSync(`/proc/${entry}/stat`, "utf8").split(") ")[1].split(" ");
-      if (Number(fields[2]) !== groupId) continue;
-      total += (Number(fields[11]) + Number(fields[12])) * 10;
-    } catch {}
+/** user + system CPU time of a process in ms, from /proc (clock ticks of 10 ms). */
+function cpuMsOf(pid: number | undefined): number {
+  try {
+    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1].split(" ");
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return NaN;
   }
-  return total;
 }
 
 export const ms = (x: number) => Math.round(x * 10) / 10;

@@ -1,8 +1,7 @@
 #!/usr/bin/env bash
 # npm run bench:api — the workspace API under load, on its own throwaway PostgreSQL cluster and
 # its own production build (.next-bench), so it never touches .data/ or a running app.
-# Stops everything it started, also on Ctrl-C. Last line:
-# bench:api: list_p95=… save_p95=… floor_p95=… list_ratio=… save_ratio=… list_cpu=… save_cpu=… errors=…
+# Stops everything it started, also on Ctrl-C. Last line: bench:api: list_p95=… save_p95=… rps=… errors=…
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
@@ -35,5 +34,5 @@ npm run --silent db:migrate
 
 build_if_stale "$RUN_DIR/build.log"
 
-# The load script seeds, starts scripts/serve.ts (every core) as its own child and stops it before it returns.
+# The load script seeds, starts `next start` as its own child and stops it before it returns.
 npx tsx scripts/bench-api.ts
