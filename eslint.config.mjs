@@ -115,7 +115,7 @@ const walls = [
   },
   {
     files: ["lib/server/**"],
-    // Known debt: the demo seed reuses the workbench presets (pure data) to write demo scenarios.
+    // Known debt: the demo seed reuses the loading desk presets (pure data) to write demo scenarios.
     ignores: ["lib/server/workspace/seed-demo-workspace.ts"],
     rules: {
       "@typescript-eslint/no-restricted-imports": restrict([

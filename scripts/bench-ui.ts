@@ -1,20 +1,20 @@
 /**
- * Speed of the workbench in headless Chromium (npm run bench:ui; not a test).
+ * Speed of the loading desk in headless Chromium (npm run bench:ui; not a test).
  * Starts the production build on its own port (builds it first into .next-bench; --reuse keeps an existing one),
  * opens /sandbox on a 20,000-increment path, then times parameter edits from the input event:
  *   firstPaint  first chart redrawn with rows of the new run
  *   full        every chart drawn with the complete result
  *   longestTask longest main-thread task (PerformanceObserver "longtask") from the edit to full
  * Targets: < 100 ms, < 300 ms, < 50 ms. Reads the page's documented hook window.__craquelure
- * (lib/client/workbench/instrumentation.ts). Last line: bench:ui: firstPaint=<ms> full=<ms> longestTask=<ms>
+ * (lib/client/loading-desk/instrumentation.ts). Last line: bench:ui: firstPaint=<ms> full=<ms> longestTask=<ms>
  */
 import { type ChildProcess, execSync, spawn } from "node:child_process";
 import { existsSync } from "node:fs";
 import { chromium, type Page } from "playwright-core";
 import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
-import { defaultWorkbenchState } from "@/lib/client/workbench/default-scenario";
-import { toScenarioFile } from "@/lib/client/workbench/scenario-state";
-import { encodeState } from "@/lib/client/workbench/url-state";
+import { defaultLoadingDeskState } from "@/lib/client/loading-desk/default-scenario";
+import { toScenarioFile } from "@/lib/client/loading-desk/scenario-state";
+import { encodeState } from "@/lib/client/loading-desk/url-state";
 
 const PORT = Number(process.env.BENCH_PORT ?? 3190);
 const EDITS = 6;
@@ -33,7 +33,7 @@ const ARGS = [
 ];
 
 function scenarioHash(): string {
-  const state = { ...defaultWorkbenchState(), name: "bench: 20,000 increments", pathText: PATH };
+  const state = { ...defaultLoadingDeskState(), name: "bench: 20,000 increments", pathText: PATH };
   const parsed = parsePathText(PATH);
   if (!parsed.ok) throw new Error("bench path does not parse");
   return `#s=${encodeState(toScenarioFile(state, parsed.doc))}`;

@@ -5,7 +5,7 @@
  */
 import * as Comlink from "comlink";
 import type { Leg, MaterialParams, RunStatus } from "@/lib/mechanics/types";
-import type { ResultChunk } from "@/lib/client/workbench/result-buffer";
+import type { ResultChunk } from "@/lib/client/loading-desk/result-buffer";
 import type { SolverApi, SolverSink } from "./solver.worker";
 
 export interface RunHandlers {

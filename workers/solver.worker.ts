@@ -1,13 +1,13 @@
 /// <reference lib="webworker" />
 /**
  * The solver worker: exposes the core over comlink and streams rows back as transferable
- * chunks. No logic of its own beyond wiring; see lib/client/workbench/chunked-run.ts.
+ * chunks. No logic of its own beyond wiring; see lib/client/loading-desk/chunked-run.ts.
  */
 import * as Comlink from "comlink";
 import { PathRun } from "@/lib/mechanics/driver";
 import type { Leg, MaterialParams, RunStatus } from "@/lib/mechanics/types";
-import { runInChunks } from "@/lib/client/workbench/chunked-run";
-import { chunkTransferables, type ResultChunk } from "@/lib/client/workbench/result-buffer";
+import { runInChunks } from "@/lib/client/loading-desk/chunked-run";
+import { chunkTransferables, type ResultChunk } from "@/lib/client/loading-desk/result-buffer";
 
 export interface SolverSink {
   start(runId: number, totalRows: number): void;

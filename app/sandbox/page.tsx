@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { SiteHeader } from "@/components/site-header";
-import { Cautions } from "@/components/workbench/cautions";
-import { SandboxWorkbench } from "@/components/workbench/sandbox-workbench";
+import { Cautions } from "@/components/loading-desk/cautions";
+import { SandboxLoadingDesk } from "@/components/loading-desk/sandbox-loading-desk";
 
 export const metadata: Metadata = {
   title: "Sandbox",
@@ -20,7 +20,7 @@ export default function SandboxPage() {
             link, or sign in to keep it in your team&apos;s store.
           </p>
         </div>
-        <SandboxWorkbench />
+        <SandboxLoadingDesk />
       </main>
       <footer className="mt-8 border-t border-glaze-line bg-glaze-deep/50">
         <div className="mx-auto max-w-[1600px] px-4 py-4">

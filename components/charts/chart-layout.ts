@@ -1,4 +1,4 @@
-import type { ChartDef } from "@/lib/client/workbench/chart-defs";
+import type { ChartDef } from "@/lib/client/loading-desk/chart-defs";
 
 const FONT = {
   family: "IBM Plex Sans Variable, system-ui, sans-serif",

@@ -1,13 +1,13 @@
 "use client";
 
 import { useMemo, useRef } from "react";
-import type { ChartDef } from "@/lib/client/workbench/chart-defs";
-import { type ChartOverlay, overlayTraces } from "@/lib/client/workbench/chart-overlays";
-import { buildChart, type TraceSource } from "@/lib/client/workbench/chart-traces";
-import { chartImageName } from "@/lib/client/workbench/file-names";
-import { emitEvent } from "@/lib/client/workbench/instrumentation";
-import type { ResultsStore } from "@/lib/client/workbench/results-store";
-import type { SetEntry } from "@/lib/client/workbench/set-list";
+import type { ChartDef } from "@/lib/client/loading-desk/chart-defs";
+import { type ChartOverlay, overlayTraces } from "@/lib/client/loading-desk/chart-overlays";
+import { buildChart, type TraceSource } from "@/lib/client/loading-desk/chart-traces";
+import { chartImageName } from "@/lib/client/loading-desk/file-names";
+import { emitEvent } from "@/lib/client/loading-desk/instrumentation";
+import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
+import type { SetEntry } from "@/lib/client/loading-desk/set-list";
 import { Plot, saveChartImage } from "./plot";
 import { chartLayout, CHART_CONFIG } from "./chart-layout";
 import { useDrawVersion } from "./use-draw-version";

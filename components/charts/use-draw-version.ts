@@ -2,7 +2,7 @@
 
 import { useEffect, useState } from "react";
 import { flushSync } from "react-dom";
-import type { ResultsStore } from "@/lib/client/workbench/results-store";
+import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import { enqueueDraw } from "./draw-queue";
 
 /** Least time between two redraws of one chart while a run is still streaming in. */

@@ -1,4 +1,4 @@
-import { SET_COLORS } from "@/lib/client/workbench/set-colors";
+import { SET_COLORS } from "@/lib/client/loading-desk/set-colors";
 import type { ChartGeometry } from "@/lib/server/handoff/report/svg-chart";
 
 const DASHES = [undefined, "5 3", "1.5 2.5"];

@@ -4,7 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import type { ScenarioFileJson } from "@/lib/client/loading-desk/scenario-state";
 import { diffScenarios } from "@/lib/shared/revision-diff";
 import { apiFetch, messageOf } from "@/lib/client/data/api-fetch";
 import { teamApi } from "@/lib/client/data/api-urls";
@@ -29,7 +29,7 @@ export interface ConflictPanelProps {
 
 /**
  * A save that lost the race: who saved what and when, the other revision beside the user's
- * edits, and a save on top of it once reviewed. The edits stay in the workbench throughout.
+ * edits, and a save on top of it once reviewed. The edits stay in the loading desk throughout.
  */
 export function ConflictPanel(props: ConflictPanelProps) {
   const { slug, scenarioId, conflict, mine } = props;
@@ -59,7 +59,7 @@ export function ConflictPanel(props: ConflictPanelProps) {
       <p className="text-sm">
         You started from revision {conflict.base}. {conflict.author} saved revision{" "}
         {conflict.latest} on {formatWhen(conflict.at)}. Nothing was overwritten and nothing of yours
-        was saved; your edits are still in the workbench below.
+        was saved; your edits are still in the loading desk below.
       </p>
       {!reviewing ? (
         <div className="flex gap-2">
@@ -99,7 +99,7 @@ export function ConflictPanel(props: ConflictPanelProps) {
             )}
           </div>
           <SaveRevisionForm
-            summary={`Saves your edits as revision ${conflict.latest + 1}, on top of revision ${conflict.latest}: every value above becomes yours, where revision ${conflict.latest} differs too. Revision ${conflict.latest} stays as it is; to keep some of its values, type them into the workbench first.`}
+            summary={`Saves your edits as revision ${conflict.latest + 1}, on top of revision ${conflict.latest}: every value above becomes yours, where revision ${conflict.latest} differs too. Revision ${conflict.latest} stays as it is; to keep some of its values, type them into the loading desk first.`}
             submitLabel={`Save as revision ${conflict.latest + 1}`}
             pending={props.pending}
             error={props.error}

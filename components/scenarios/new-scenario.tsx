@@ -3,11 +3,11 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 
-import { Workbench } from "@/components/workbench/workbench";
+import { LoadingDesk } from "@/components/loading-desk/loading-desk";
 import { checkScenario } from "@/lib/client/sets/check-scenario";
-import { defaultScenario } from "@/lib/client/workbench/default-scenario";
+import { defaultScenario } from "@/lib/client/loading-desk/default-scenario";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
-import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import type { ScenarioFileJson } from "@/lib/client/loading-desk/scenario-state";
 import { messageOf } from "@/lib/client/data/api-fetch";
 import { useLibraryChoices } from "@/lib/client/data/use-library-choices";
 import { teamPages } from "@/lib/client/data/api-urls";
@@ -32,7 +32,7 @@ function starter(checkSet: NewScenarioProps["checkSet"]): ScenarioFileJson {
   return { ...defaultScenario(), name: "New scenario" };
 }
 
-/** The workbench on the starting template; saving creates the scenario with revision 1. */
+/** The loading desk on the starting template; saving creates the scenario with revision 1. */
 export function NewScenario({ slug, checkSet }: NewScenarioProps) {
   const router = useRouter();
   const create = useCreateScenario(slug);
@@ -46,7 +46,7 @@ export function NewScenario({ slug, checkSet }: NewScenarioProps) {
   const submit = (message: string) => {
     if (!pending) return;
     const name = pending.name.trim();
-    if (!name) return setError("Give the scenario a name (the title above the workbench).");
+    if (!name) return setError("Give the scenario a name (the title above the loading desk).");
     setError(null);
     create.mutate(
       { name, materialLabel: material.trim(), tags: parseTags(tags), message, file: pending },
@@ -93,7 +93,7 @@ export function NewScenario({ slug, checkSet }: NewScenarioProps) {
           />
         </div>
       ) : null}
-      <Workbench library={library} initialScenario={initial} onSave={(f) => setPending(f)} />
+      <LoadingDesk library={library} initialScenario={initial} onSave={(f) => setPending(f)} />
     </div>
   );
 }

@@ -1,9 +1,9 @@
 "use client";
 
-import { overlayAxesOf } from "@/lib/client/workbench/record-overlay";
+import { overlayAxesOf } from "@/lib/client/loading-desk/record-overlay";
 import { messageOf } from "@/lib/client/data/api-fetch";
 import { useTestRecords } from "@/lib/client/data/use-test-records";
-import { STRAIN_LABEL, STRESS_LABEL } from "@/lib/client/workbench/chart-defs";
+import { STRAIN_LABEL, STRESS_LABEL } from "@/lib/client/loading-desk/chart-defs";
 
 export interface RecordOverlayPickerProps {
   slug: string;

@@ -3,8 +3,8 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 
-import { Workbench } from "@/components/workbench/workbench";
-import type { OpenedScenario, ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import { LoadingDesk } from "@/components/loading-desk/loading-desk";
+import type { OpenedScenario, ScenarioFileJson } from "@/lib/client/loading-desk/scenario-state";
 import { messageOf } from "@/lib/client/data/api-fetch";
 import { useLibraryChoices } from "@/lib/client/data/use-library-choices";
 import { teamPages } from "@/lib/client/data/api-urls";
@@ -25,7 +25,7 @@ export interface ScenarioEditorProps {
   editable: boolean;
 }
 
-/** The workbench on a saved revision, with save-as-new-revision and the 409 path. */
+/** The loading desk on a saved revision, with save-as-new-revision and the 409 path. */
 export function ScenarioEditor({ slug, scenarioId, number, file, editable }: ScenarioEditorProps) {
   const router = useRouter();
   const save = useSaveRevision(slug, scenarioId);
@@ -105,7 +105,7 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
           errors={records.errors}
         />
       </div>
-      <Workbench
+      <LoadingDesk
         library={library}
         initialScenario={file}
         readOnly={!editable}

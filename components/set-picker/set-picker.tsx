@@ -3,7 +3,7 @@
 import { useState } from "react";
 
 import type { LibraryChoice } from "@/lib/client/sets/library-choice";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
 export interface SetPickerProps {

@@ -2,7 +2,7 @@ import type { MaterialParams } from "./types";
 
 /**
  * The demo SMC parameter set of damage-law.md A.3: invented values [I] in the window of a
- * 25–30 wt% glass SMC. Shared by the workbench preset, the benchmark and the invented demo
+ * 25–30 wt% glass SMC. Shared by the loading desk preset, the benchmark and the invented demo
  * curves; tests keep their own literal copy so they do not trust this one.
  */
 export const DEMO_SMC: Readonly<MaterialParams> = Object.freeze({

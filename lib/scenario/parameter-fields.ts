@@ -1,5 +1,5 @@
 /**
- * What the workbench form and the error messages need to know about each field of a parameter
+ * What the loading desk form and the error messages need to know about each field of a parameter
  * set (spec damage-law.md A.3; defaults from scenario-file.md). The ranges themselves are
  * enforced in parameter-set-schema.ts; `range` here is the same rule written for people.
  */

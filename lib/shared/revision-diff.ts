@@ -1,6 +1,6 @@
 /**
  * Structured difference of two scenario files (parsed, defaults filled): parameter sets
- * matched by id, path legs compared by position. Pure, so the workbench can use it too.
+ * matched by id, path legs compared by position. Pure, so the loading desk can use it too.
  */
 import type { Scenario } from "@/lib/scenario/scenario-schema";
 

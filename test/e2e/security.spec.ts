@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { baseUrl, launchBrowser, newContext, type Browser, type Page } from "./support/browser";
 import { screenshot } from "./support/screenshot";
 
-// The headers of proxy.ts in a real browser: the workbench still computes and draws under the
+// The headers of proxy.ts in a real browser: the loading desk still computes and draws under the
 // nonce policy, and markup typed into names and comments reaches the page as text only.
 const TEAM = "demo-composites-lab";
 const DEMO_FILE = JSON.parse(readFileSync("test/fixtures/demo-scenario.json", "utf8"));

@@ -1,11 +1,12 @@
+import { readDeskExtras } from "@/lib/scenario/desk-extras";
 import type { Metadata } from "next";
 import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 
 import { SiteHeader } from "@/components/site-header";
 import { SharedRevisionHeader } from "@/components/share/shared-revision-header";
-import { SharedWorkbenchLoader } from "@/components/share/shared-workbench-loader";
-import { Cautions } from "@/components/workbench/cautions";
+import { SharedLoadingDeskLoader } from "@/components/share/shared-loading-desk-loader";
+import { Cautions } from "@/components/loading-desk/cautions";
 import { getDb } from "@/db/index";
 import { clientAddressOf } from "@/lib/server/http/request-actor";
 import { orNotFound } from "@/lib/server/access/or-not-found";
@@ -35,7 +36,7 @@ export default async function SharedRevisionPage({
   const shared = await open(token);
   const parsed = parseScenarioFile(shared.file);
   if (!parsed.ok) notFound();
-  const scenario = { ...parsed.scenario, workbench: shared.file.workbench };
+  const scenario = { ...parsed.scenario, desk: readDeskExtras(shared.file) };
   return (
     <>
       <SiteHeader />
@@ -46,7 +47,7 @@ export default async function SharedRevisionPage({
             <Cautions />
           </div>
         </div>
-        <SharedWorkbenchLoader scenario={scenario} />
+        <SharedLoadingDeskLoader scenario={scenario} />
       </main>
       <footer className="mt-8 border-t border-glaze-line bg-glaze-deep/50">
         <div className="mx-auto max-w-[1600px] px-4 py-4">

@@ -1,6 +1,6 @@
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
-import { defaultScenario } from "@/lib/client/workbench/default-scenario";
-import { encodeState, URL_STATE_KEY } from "@/lib/client/workbench/url-state";
+import { defaultScenario } from "@/lib/client/loading-desk/default-scenario";
+import { encodeState, URL_STATE_KEY } from "@/lib/client/loading-desk/url-state";
 
 /**
  * A sandbox link that opens one library set on the default path: trying a set needs no
@@ -13,7 +13,7 @@ export function sandboxLinkForSet(name: string, values: Record<string, unknown>)
     ...file,
     name: `${name} — growing cycles`.slice(0, 500),
     parameterSets: [set],
-    workbench: { ...file.workbench, hidden: [] },
+    desk: { ...file.desk, hidden: [] },
   };
   return `/sandbox#${URL_STATE_KEY}=${encodeState(opened)}`;
 }

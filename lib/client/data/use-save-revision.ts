@@ -2,7 +2,7 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 
-import type { ScenarioFileJson } from "@/lib/client/workbench/scenario-state";
+import type { ScenarioFileJson } from "@/lib/client/loading-desk/scenario-state";
 
 import { apiFetch } from "./api-fetch";
 import { teamApi } from "./api-urls";

@@ -3,8 +3,8 @@
 import { useQueries, useQuery, type UseQueryResult } from "@tanstack/react-query";
 
 import type { TestRecordListResponse, TestRecordResponse } from "@/lib/server/records/records";
-import { recordOverlay } from "@/lib/client/workbench/record-overlay";
-import type { ChartOverlay } from "@/lib/client/workbench/chart-overlays";
+import { recordOverlay } from "@/lib/client/loading-desk/record-overlay";
+import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
 
 import { apiFetch, messageOf } from "./api-fetch";
 import { teamApi } from "./api-urls";

@@ -4,8 +4,8 @@
  */
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
-import { type ScenarioFileJson, toScenarioFile } from "@/lib/client/workbench/scenario-state";
-import { setListReducer } from "@/lib/client/workbench/set-list";
+import { type ScenarioFileJson, toScenarioFile } from "@/lib/client/loading-desk/scenario-state";
+import { setListReducer } from "@/lib/client/loading-desk/set-list";
 
 export const CHECK_PATH_TEXT =
   "# tension → unload → compression: does the damage close in compression?\n" +

@@ -10,7 +10,7 @@ import { parameterSets } from "@/db/schema/parameter-sets";
 import { scenarios } from "@/db/schema/scenarios";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { DEMO_SMC } from "@/lib/mechanics/demo-set";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
 
 import { createParameterSet } from "./parameter-sets";
 import { createScenario } from "./scenarios";

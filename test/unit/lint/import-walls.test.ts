@@ -41,7 +41,7 @@ describe("import walls", () => {
   it("refuse React in lib/shared and client code in lib/server", async () => {
     const react = 'import { useState } from "react";\nexport const x = useState;\n';
     const client =
-      'import { PRESETS } from "@/lib/client/workbench/presets";\nexport const x = PRESETS;\n';
+      'import { PRESETS } from "@/lib/client/loading-desk/presets";\nexport const x = PRESETS;\n';
     expect(await wallErrors(react, "lib/shared/x.ts")).toHaveLength(1);
     expect(await wallErrors(client, "lib/server/x.ts")).toHaveLength(1);
   });

@@ -10,8 +10,8 @@ import type { ConformanceResult } from "@/lib/server/handoff/conformance/types";
 import { RESULT_COLUMNS, type ResultColumns } from "@/lib/mechanics/types";
 import { csvCell, csvRow } from "@/lib/shared/csv-writer";
 import { STUDY_SUMMARY_HEADER, studySummaryCsv } from "@/lib/shared/study-summary-csv";
-import { allSetsCsv } from "@/lib/client/workbench/csv-export";
-import { ResultBuffer } from "@/lib/client/workbench/result-buffer";
+import { allSetsCsv } from "@/lib/client/loading-desk/csv-export";
+import { ResultBuffer } from "@/lib/client/loading-desk/result-buffer";
 
 const FORMULA = "=cmd|' /C calc'!A0";
 const COMMA = "set, with a comma";
@@ -89,7 +89,7 @@ describe("security: formula injection and broken quoting in exported CSVs", () =
     }
   });
 
-  it("workbench all-sets CSV: the set column holds the whole id, neutralised", () => {
+  it("loading desk all-sets CSV: the set column holds the whole id, neutralised", () => {
     const b = new ResultBuffer(2);
     for (const c of RESULT_COLUMNS) b.columns[c][0] = c === "sig11" ? -1 : 0;
     b.rows = 1;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
-import { defaultScenario } from "@/lib/client/workbench/default-scenario";
+import { defaultScenario } from "@/lib/client/loading-desk/default-scenario";
 import { formatValue, formatWhen } from "@/lib/client/data/format";
 import { overlayRevisions, samePath } from "@/lib/client/data/overlay";
 
@@ -23,17 +23,17 @@ describe("overlay of two revisions", () => {
     expect(new Set(merged.parameterSets.map((s) => s.id)).size).toBe(2);
     expect(parseScenarioFile(merged).ok).toBe(true);
     expect(samePath(a, b)).toBe(true);
-    expect(merged.workbench).toBeUndefined();
+    expect(merged.desk).toBeUndefined();
   });
 
   it("keeps the base's path text so repeat blocks stay readable", () => {
     const a = scenarioWith("SMC", 11000);
     const text = "repeat 2 grow 1\n  ε11=0.2% over 60\n  σ11=0 over 60\nend\n";
     const merged = overlayRevisions(
-      { number: 3, scenario: a, workbench: { pathText: text, hidden: ["A"] } },
+      { number: 3, scenario: a, desk: { pathText: text, hidden: ["A"] } },
       { number: 2, scenario: a },
     );
-    expect(merged.workbench).toEqual({ pathText: text, hidden: [] });
+    expect(merged.desk).toEqual({ pathText: text, hidden: [] });
   });
 });
 

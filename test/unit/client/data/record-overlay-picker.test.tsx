@@ -72,7 +72,7 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-describe("test records over the workbench charts", () => {
+describe("test records over the loading desk charts", () => {
   it("lists the team's records and refuses the ones with no stress–strain pair", async () => {
     mockApi();
     mount();

@@ -1,8 +1,8 @@
 import { describe, expect, it } from "vitest";
 
-import { decodeState } from "@/lib/client/workbench/url-state";
+import { decodeState } from "@/lib/client/loading-desk/url-state";
 import { sandboxLinkForSet } from "@/lib/client/data/sandbox-link";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
 
 describe("a library set tried in the sandbox", () => {
   it("opens as a valid scenario with that set, named after it", () => {

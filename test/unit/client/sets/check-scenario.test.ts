@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { checkScenario } from "@/lib/client/sets/check-scenario";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
 
 describe("checkScenario", () => {

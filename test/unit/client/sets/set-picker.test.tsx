@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 
 import { SetPicker } from "@/components/set-picker/set-picker";
 import { toLibraryChoice } from "@/lib/client/sets/library-choice";
-import { PRESETS } from "@/lib/client/workbench/presets";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
 
 const fitted = toLibraryChoice({
   id: "5b0c6f3e-1111-4222-8333-944455556666",

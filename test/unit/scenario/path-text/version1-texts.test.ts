@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
-import { PRESETS } from "@/lib/client/workbench/presets";
-import { fromScenario } from "@/lib/client/workbench/scenario-state";
+import { PRESETS } from "@/lib/client/loading-desk/presets";
+import { fromScenario } from "@/lib/client/loading-desk/scenario-state";
 import { pathTextInCurrentWords } from "@/lib/scenario/path-text/convert-version1";
 import { expandPathDoc } from "@/lib/scenario/path-text/path-doc";
 import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";

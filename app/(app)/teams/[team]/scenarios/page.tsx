@@ -3,7 +3,7 @@ import Link from "next/link";
 
 import { QueryProvider } from "@/components/providers/query-provider";
 import { ScenariosTable } from "@/components/scenarios/scenarios-table";
-import { Cautions } from "@/components/workbench/cautions";
+import { Cautions } from "@/components/loading-desk/cautions";
 import { getDb } from "@/db/index";
 import { listScenariosForTeam } from "@/db/queries/scenarios";
 import { requireTeamRole } from "@/lib/server/access/guard";

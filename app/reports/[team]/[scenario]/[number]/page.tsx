@@ -10,7 +10,7 @@ import { ProvenanceList } from "@/components/report/provenance-list";
 import { ReviewSection } from "@/components/report/review-section";
 import { SignOff } from "@/components/report/sign-off";
 import { SvgChart } from "@/components/report/svg-chart";
-import { CAUTION_TEXT } from "@/components/workbench/cautions";
+import { CAUTION_TEXT } from "@/components/loading-desk/cautions";
 import { getDb } from "@/db/index";
 import { getActor } from "@/lib/server/accounts/auth/session";
 import { orNotFound } from "@/lib/server/access/or-not-found";

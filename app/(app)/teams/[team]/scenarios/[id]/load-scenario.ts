@@ -1,12 +1,14 @@
 import "server-only";
 
+import { readDeskExtras } from "@/lib/scenario/desk-extras";
+
 import { notFound } from "next/navigation";
 
 import type { Db } from "@/db/client";
 import { findRevisionRow, listRevisionsOfScenario } from "@/db/queries/revisions";
 import { findScenarioSummary } from "@/db/queries/scenarios";
 import { parseScenarioFile, type Scenario } from "@/lib/scenario/scenario-schema";
-import type { OpenedScenario } from "@/lib/client/workbench/scenario-state";
+import type { OpenedScenario } from "@/lib/client/loading-desk/scenario-state";
 import { isUuid } from "@/lib/shared/uuid";
 
 const NUMBER = /^[1-9][0-9]{0,8}$/;
@@ -29,7 +31,7 @@ async function loadFile(db: Db, scenarioId: string, number: number) {
   const parsed = parseScenarioFile(row.file);
   // Stored files were validated on save; a file that no longer parses is not shown half-read.
   if (!parsed.ok) notFound();
-  const opened: OpenedScenario = { ...parsed.scenario, workbench: row.file.workbench };
+  const opened: OpenedScenario = { ...parsed.scenario, desk: readDeskExtras(row.file) };
   return { scenario: parsed.scenario as Scenario, opened };
 }
 

@@ -40,7 +40,7 @@ export default async function ScenarioPage({
   const editable = can(ctx.role, "scenario:edit") && number === latest && !other;
   const file = other
     ? overlayRevisions(
-        { number, scenario: current.scenario, workbench: current.opened.workbench },
+        { number, scenario: current.scenario, desk: current.opened.desk },
         { number: overlay!, scenario: other.scenario },
       )
     : current.opened;

@@ -5,7 +5,7 @@ import { ConformanceResultTable } from "@/components/conformance/result-table";
 import { ConformanceUploadForm } from "@/components/conformance/upload-form";
 import { CurveChart } from "@/components/records/curve-chart";
 import { RevisionCrumb } from "@/components/scenarios/revision-crumb";
-import { Cautions } from "@/components/workbench/cautions";
+import { Cautions } from "@/components/loading-desk/cautions";
 import { can } from "@/lib/shared/permissions";
 import { conformanceTraces } from "@/lib/server/handoff/conformance/curves";
 import {

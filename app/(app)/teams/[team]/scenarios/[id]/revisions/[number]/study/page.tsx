@@ -4,7 +4,7 @@ import Link from "next/link";
 import { StudyForm } from "@/components/studies/study-form";
 import { StudyProgress } from "@/components/studies/study-progress";
 import { RevisionCrumb } from "@/components/scenarios/revision-crumb";
-import { Cautions } from "@/components/workbench/cautions";
+import { Cautions } from "@/components/loading-desk/cautions";
 import { listStudiesForTeam } from "@/db/queries/studies";
 import { loadRevisionPage } from "@/lib/server/access/revision-page";
 import { can } from "@/lib/shared/permissions";

@@ -1,0 +1,85 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import { ResultChart } from "@/components/charts/result-chart";
+import {
+  FIXED_CHARTS,
+  STRAIN_LABEL,
+  STRESS_LABEL,
+  type StrainComponent,
+  type StressComponent,
+  stressStrainDef,
+} from "@/lib/client/loading-desk/chart-defs";
+import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
+import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
+import type { SetEntry } from "@/lib/client/loading-desk/set-list";
+import { IncrementCursor } from "./increment-cursor";
+
+export interface ChartGridProps {
+  store: ResultsStore;
+  entries: SetEntry[];
+  scenarioName: string;
+  totalIncrements: number;
+  overlays?: readonly ChartOverlay[];
+}
+
+const pickCls = "rounded border border-glaze-line bg-white px-1 py-0.5 text-xs";
+
+/** The live charts, every visible set overlaid, one increment cursor shared by all. */
+export function ChartGrid({
+  store,
+  entries,
+  scenarioName,
+  totalIncrements,
+  overlays,
+}: ChartGridProps) {
+  const [x, setX] = useState<StrainComponent>("eps11");
+  const [y, setY] = useState<StressComponent>("sig11");
+  const [cursor, setCursor] = useState<number | null>(null);
+  const ssDef = useMemo(() => stressStrainDef(x, y), [x, y]);
+  const common = { store, entries, cursor, onCursor: setCursor, scenarioName };
+  const pickers = (
+    <span className="flex items-center gap-1 text-xs">
+      <select
+        aria-label="Stress component (vertical axis)"
+        value={y}
+        onChange={(e) => setY(e.target.value as StressComponent)}
+        className={pickCls}
+      >
+        {Object.entries(STRESS_LABEL).map(([k, v]) => (
+          <option key={k} value={k}>
+            {v}
+          </option>
+        ))}
+      </select>
+      <span className="text-ink-faint">against</span>
+      <select
+        aria-label="Strain component (horizontal axis)"
+        value={x}
+        onChange={(e) => setX(e.target.value as StrainComponent)}
+        className={pickCls}
+      >
+        {Object.entries(STRAIN_LABEL).map(([k, v]) => (
+          <option key={k} value={k}>
+            {v}
+          </option>
+        ))}
+      </select>
+    </span>
+  );
+  return (
+    <div className="space-y-3">
+      <IncrementCursor value={cursor} max={totalIncrements} onChange={setCursor} />
+      <div className="grid grid-cols-1 gap-3 xl:grid-cols-2">
+        <ResultChart def={ssDef} controls={pickers} overlays={overlays} {...common} />
+        {FIXED_CHARTS.map((def) => (
+          <ResultChart key={def.key} def={def} {...common} />
+        ))}
+      </div>
+      <p className="text-xs text-ink-faint">
+        Marks: ○ damage onset, ◆ peak stress, ✕ failure flag. Click a point to move the increment
+        cursor. Curves are thinned for display (turning points kept); exports carry every increment.
+      </p>
+    </div>
+  );
+}

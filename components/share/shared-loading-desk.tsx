@@ -1,0 +1,13 @@
+"use client";
+
+import { LoadingDesk } from "@/components/loading-desk/loading-desk";
+import type { OpenedScenario } from "@/lib/client/loading-desk/scenario-state";
+
+export interface SharedLoadingDeskProps {
+  scenario: OpenedScenario;
+}
+
+/** The loading desk, read-only: charts, results table and export, nothing saved anywhere. */
+export function SharedLoadingDesk({ scenario }: SharedLoadingDeskProps) {
+  return <LoadingDesk initialScenario={scenario} readOnly />;
+}

@@ -1,0 +1,119 @@
+/**
+ * What each chart of the loading desk plots: columns, names, units. Strain mm/mm, stress and
+ * energy density MPa, damage dimensionless, x "increment" = the increment column.
+ */
+import type { ResultColumn } from "@/lib/mechanics/types";
+
+export interface SeriesDef {
+  key: string;
+  x: ResultColumn;
+  y: ResultColumn;
+  name: string;
+  dash: "solid" | "dash" | "dot";
+}
+
+export interface ChartDef {
+  key: string;
+  title: string;
+  xTitle: string;
+  yTitle: string;
+  xUnit: string;
+  yUnit: string;
+  series: SeriesDef[];
+  /** Whether onset / peak / failure marks are drawn. */
+  marks: boolean;
+}
+
+export type StrainComponent = "eps11" | "eps22" | "gam12";
+export type StressComponent = "sig11" | "sig22" | "sig12";
+
+export const STRAIN_LABEL: Record<StrainComponent, string> = {
+  eps11: "ε11",
+  eps22: "ε22",
+  gam12: "γ12",
+};
+export const STRESS_LABEL: Record<StressComponent, string> = {
+  sig11: "σ11",
+  sig22: "σ22",
+  sig12: "σ12",
+};
+
+export function stressStrainDef(x: StrainComponent, y: StressComponent): ChartDef {
+  return {
+    key: "stress-strain",
+    title: `Stress–strain: ${STRESS_LABEL[y]} against ${STRAIN_LABEL[x]}`,
+    xTitle: `${STRAIN_LABEL[x]} (mm/mm)`,
+    yTitle: `${STRESS_LABEL[y]} (MPa)`,
+    xUnit: "mm/mm",
+    yUnit: "MPa",
+    series: [{ key: "curve", x, y, name: `${STRESS_LABEL[y]}–${STRAIN_LABEL[x]}`, dash: "solid" }],
+    marks: true,
+  };
+}
+
+const overIncrements = (
+  key: string,
+  y: ResultColumn,
+  name: string,
+  dash: SeriesDef["dash"],
+): SeriesDef => ({
+  key,
+  x: "increment",
+  y,
+  name,
+  dash,
+});
+
+export const FIXED_CHARTS: readonly ChartDef[] = [
+  {
+    key: "damage",
+    title: "Damage against increment",
+    xTitle: "increment",
+    yTitle: "damage (–)",
+    xUnit: "",
+    yUnit: "",
+    series: [overIncrements("d1", "d1", "d1", "solid"), overIncrements("d2", "d2", "d2", "dash")],
+    marks: true,
+  },
+  {
+    key: "force",
+    title: "Thermodynamic force against damage",
+    xTitle: "damage d (–)",
+    yTitle: "Ȳ (MPa)",
+    xUnit: "",
+    yUnit: "MPa",
+    series: [
+      { key: "f1", x: "d1", y: "Ybar1", name: "Ȳ1 vs d1", dash: "solid" },
+      { key: "f2", x: "d2", y: "Ybar2", name: "Ȳ2 vs d2", dash: "dash" },
+    ],
+    marks: false,
+  },
+  {
+    key: "permanent-strain",
+    title: "Permanent strain against increment",
+    xTitle: "increment",
+    yTitle: "εp (mm/mm)",
+    xUnit: "",
+    yUnit: "mm/mm",
+    series: [
+      overIncrements("p11", "epsP11", "εp11", "solid"),
+      overIncrements("p22", "epsP22", "εp22", "dash"),
+      overIncrements("p12", "gamP12", "γp12", "dot"),
+    ],
+    marks: false,
+  },
+  {
+    key: "energy",
+    title: "Work, stored and dissipated energy",
+    xTitle: "increment",
+    yTitle: "W, ψ, Φ (MPa = MJ/m³)",
+    xUnit: "",
+    yUnit: "MPa",
+    series: [
+      overIncrements("W", "W", "W work in", "solid"),
+      overIncrements("psi", "psi", "ψ stored", "dash"),
+      overIncrements("Phi", "Phi", "Φ dissipated", "dot"),
+    ],
+    marks: false,
+  },
+];
