@@ -7,7 +7,7 @@ import * as studyRoute from "@/app/api/v1/teams/[team]/studies/[study]/route";
 import * as studiesRoute from "@/app/api/v1/teams/[team]/studies/route";
 import { requireDatabaseUrl } from "@/db/client";
 import { runPath } from "@/lib/mechanics/driver";
-import type { PathRunner } from "@/lib/scenario/drive-command";
+import type { PathRunner } from "@/lib/scenario/run-scenario-file";
 import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
 import { resultsToCsv } from "@/lib/scenario/results-csv";
 import { listStudiesForTeam, listStudyResults } from "@/db/queries/studies";

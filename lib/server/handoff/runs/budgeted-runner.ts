@@ -7,7 +7,7 @@ import "server-only";
  */
 import { PathRun } from "@/lib/mechanics/driver";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
-import type { PathRunner } from "@/lib/scenario/drive-command";
+import type { PathRunner } from "@/lib/scenario/run-scenario-file";
 
 /** Increments between two looks at the clock: small enough to stop promptly, cheap to check. */
 export const CHUNK_INCREMENTS = 8192;
@@ -15,6 +15,9 @@ export const CHUNK_INCREMENTS = 8192;
 export const DEFAULT_RUN_BUDGET_MS = 20_000;
 
 export class TimeBudgetExceeded extends Error {
+  /** Passes through the run function (run-scenario-file.ts) instead of reading as a core fault. */
+  readonly stopsRun = true;
+
   constructor(readonly budgetMs: number) {
     super(`run exceeded its time budget of ${budgetMs / 1000} s`);
     this.name = "TimeBudgetExceeded";

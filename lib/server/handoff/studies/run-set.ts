@@ -2,7 +2,7 @@ import "server-only";
 
 /** One set of a study: the contract's CSV of its run, like `npm run drive -- --set <id>`. */
 import type { Leg, RunStatus } from "@/lib/mechanics/types";
-import type { PathRunner } from "@/lib/scenario/drive-command";
+import type { PathRunner } from "@/lib/scenario/run-scenario-file";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import { resultsToCsv } from "@/lib/scenario/results-csv";
 

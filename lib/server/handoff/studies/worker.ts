@@ -8,7 +8,7 @@ import type PgBoss from "pg-boss";
 
 import type { Executor } from "@/db/client";
 import { claimStudyItem, finishStudyItem } from "@/db/queries/studies";
-import type { PathRunner } from "@/lib/scenario/drive-command";
+import type { PathRunner } from "@/lib/scenario/run-scenario-file";
 import { budgetedRunner, runBudgetMs } from "@/lib/server/handoff/runs/budgeted-runner";
 
 import { STUDY_QUEUE, type StudyJob } from "./queue";
