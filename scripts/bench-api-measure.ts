@@ -1,5 +1,5 @@
 /** One autocannon phase with its own p95 (autocannon reports p90 and p97.5, not p95). */
-import { readFileSync } from "node:fs";
+import { readdirSync, readFileSync } from "node:fs";
 
 import autocannon from "autocannon";
 
@@ -12,18 +12,29 @@ export interface Phase {
   p99: number;
   errors: number;
   statuses: Record<number, number>;
-  /** CPU the app process spent per request (Linux /proc), independent of other load. */
+  /** CPU the app's processes spent per request (Linux /proc), independent of other load. */
   serverCpuMs: number;
 }
 
-/** user + system CPU time of a process in ms, from /proc (clock ticks of 10 ms). */
-function cpuMsOf(pid: number | undefined): number {
-  try {
-    const fields = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1].split(" ");
-    return (Number(fields[11]) + Number(fields[12])) * 10;
-  } catch {
-    return NaN;
+/**
+ * user + system CPU time in ms (clock ticks of 10 ms, from /proc) of every live process in the
+ * process group `group`: the app is started as a group leader, so a cluster of app processes
+ * (and anything they spawn) is counted whole.
+ */
+function cpuMsOfGroup(group: number | undefined): number {
+  if (group === undefined) return NaN;
+  let total = 0;
+  for (const entry of readdirSync("/proc")) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      const fields = readFileSync(`/proc/${entry}/stat`, "utf8").split(") ")[1].split(" ");
+      // After the command: state, ppid, pgrp, …, utime (14th field), stime (15th).
+      if (Number(fields[2]) === group) total += (Number(fields[11]) + Number(fields[12])) * 10;
+    } catch {
+      // The process ended between the listing and the read.
+    }
   }
+  return total;
 }
 
 export const ms = (x: number) => Math.round(x * 10) / 10;
@@ -37,9 +48,10 @@ export const percentile = (sorted: number[], p: number) =>
 export async function measure(
   name: string,
   options: autocannon.Options,
-  serverPid: number | undefined,
+  /** Process group of the app (its leader's pid). */
+  serverGroup: number | undefined,
 ): Promise<Phase> {
-  const cpuBefore = cpuMsOf(serverPid);
+  const cpuBefore = cpuMsOfGroup(serverGroup);
   const times: number[] = [];
   const statuses: Record<number, number> = {};
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
@@ -60,6 +72,6 @@ export async function measure(
     p99: ms(percentile(times, 99)),
     errors: bad + result.errors + result.timeouts,
     statuses,
-    serverCpuMs: ms((cpuMsOf(serverPid) - cpuBefore) / Math.max(1, times.length)),
+    serverCpuMs: ms((cpuMsOfGroup(serverGroup) - cpuBefore) / Math.max(1, times.length)),
   };
 }

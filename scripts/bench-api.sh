@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # npm run bench:api — the workspace API under load, on its own throwaway PostgreSQL cluster and
 # its own production build (.next-bench), so it never touches .data/ or a running app.
-# Stops everything it started, also on Ctrl-C. Last line: bench:api: list_p95=… save_p95=… rps=… errors=…
+# Stops everything it started, also on Ctrl-C. Last line:
+# bench:api: list_p95=… save_p95=… floor_p95=… list_ratio=… save_ratio=… list_cpu=… save_cpu=… errors=…
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/lib/common.sh
