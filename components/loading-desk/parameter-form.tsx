@@ -3,7 +3,12 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useEffect } from "react";
 import { useForm, useWatch } from "react-hook-form";
-import { PARAMETER_FIELDS, type ParameterField } from "@/lib/scenario/parameter-fields";
+import {
+  PARAMETER_FIELDS,
+  type ParameterField,
+  choiceText,
+  labelOf,
+} from "@/lib/scenario/parameter-fields";
 import { rangeFor, unitFor } from "@/lib/client/loading-desk/field-text";
 import { plausibilityWarnings } from "@/lib/scenario/plausibility";
 import {
@@ -79,8 +84,8 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
     >
       {invalid.length > 0 ? (
         <p role="status" className="rounded border border-kiln bg-kiln-light/40 px-2 py-1 text-xs">
-          {invalid.join(", ")} {invalid.length === 1 ? "needs" : "need"} a valid value: the charts
-          show the last valid values of set {set.id} until then.
+          {invalid.map(labelOf).join(", ")} {invalid.length === 1 ? "needs" : "need"} a valid value:
+          the charts show the last valid values of set {set.id} until then.
         </p>
       ) : null}
       {GROUPS.map((g) => (
@@ -104,7 +109,8 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                     title={f.meaning}
                   >
                     <span className="font-medium">{symbol}</span>
-                    {unitFor(f, law) && f.unit !== "–" ? (
+                    <span className="truncate text-xs">{f.label}</span>
+                    {unitFor(f, law) ? (
                       <span className="truncate text-xs text-ink-faint">{unitFor(f, law)}</span>
                     ) : null}
                   </label>
@@ -116,7 +122,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                     >
                       {f.choices!.map((c) => (
                         <option key={c} value={c}>
-                          {c}
+                          {choiceText(f, c)}
                         </option>
                       ))}
                     </select>
@@ -136,7 +142,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                     id={`${id}-hint`}
                     className={`mt-0.5 text-xs ${error ? "text-kiln-dark" : "text-ink-faint"}`}
                   >
-                    {error ? `${symbol} ${error}` : rangeFor(f, law)}
+                    {error ? `${labelOf(symbol)} ${error}` : rangeFor(f, law)}
                   </p>
                   {warning ? (
                     <p className="mt-0.5 text-xs text-ochre-dark" data-testid={`${id}-warning`}>

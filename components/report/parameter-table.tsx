@@ -1,13 +1,10 @@
-import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+import { PARAMETER_FIELDS, type ParameterField, unitOf } from "@/lib/scenario/parameter-fields";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
-// The slopes a1, a2 have the unit of the growth law the set uses (A.3): d against sqrt(Y) or Y.
-const SLOPE_UNITS: Record<string, string> = { sqrtY: "MPa⁻⁰·⁵", linY: "MPa⁻¹" };
-
-function unitOf(symbol: string, fallback: string, sets: ParameterSet[]): string {
-  if (symbol !== "a1" && symbol !== "a2") return fallback;
-  const units = [...new Set(sets.map((s) => SLOPE_UNITS[s.law] ?? fallback))];
-  return units.length === 1 ? units[0] : units.join(" / ");
+// A unit that depends on the growth law (the slopes) is written once per law the sets use.
+function unitForSets(field: ParameterField, sets: ParameterSet[]): string {
+  const units = [...new Set(sets.map((s) => unitOf(field, s.law)))];
+  return units.join(" / ");
 }
 
 /** Every parameter of every set with its unit: the table the simulation team types in. */
@@ -29,8 +26,10 @@ export function ParameterTable({ sets }: { sets: ParameterSet[] }) {
       <tbody>
         {PARAMETER_FIELDS.map((f) => (
           <tr key={f.symbol} className="border-b border-glaze-line">
-            <td className="py-0.5 font-mono">{f.symbol}</td>
-            <td>{unitOf(f.symbol, f.unit, sets)}</td>
+            <td className="py-0.5">
+              <span className="font-mono">{f.symbol}</span> {f.label}
+            </td>
+            <td>{unitForSets(f, sets)}</td>
             {sets.map((s) => (
               <td key={s.id} className="text-right font-mono">
                 {String((s as unknown as Record<string, unknown>)[f.symbol] ?? "—")}

@@ -72,7 +72,7 @@ export function extractPoints(table: CurveTable, mapping: ColumnMappingChoice): 
     strainUnit = detectStrainUnit(strainColumn);
     if (strainUnit === "percent")
       warnings.push(
-        "Strain exceeds 0.2, so it was read as percent and divided by 100 (spec E.1). Choose the unit if that is wrong.",
+        "Strain exceeds 0.2, so it was read as percent and divided by 100. Choose the unit if that is wrong.",
       );
   }
   let stressUnit: StressUnit =
@@ -83,7 +83,7 @@ export function extractPoints(table: CurveTable, mapping: ColumnMappingChoice): 
     stressUnit = detectStressUnit(stressColumn);
     if (stressUnit === "Pa")
       warnings.push(
-        "Stress exceeds 1e5, so it was read as Pa and divided by 1e6 (spec E.1). Choose the unit if that is wrong.",
+        "Stress exceeds 1e5, so it was read as Pa and divided by 1e6. Choose the unit if that is wrong.",
       );
   }
   const scaled = (channel: Channel): Float64Array | undefined => {

@@ -1,4 +1,4 @@
-import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+import { PARAMETER_FIELDS, unitOf } from "@/lib/scenario/parameter-fields";
 
 import { formatValue } from "./format";
 
@@ -26,18 +26,12 @@ export function provenanceText(p: ProvenanceLike): string {
   return "typed in";
 }
 
-/** A field's unit for this set: the growth slopes' unit depends on the law. */
-function unitOf(unit: string, law: unknown): string {
-  if (unit === "–") return "";
-  if (unit.includes("(sqrtY)")) return law === "linY" ? "MPa^-1" : "MPa^-0.5";
-  return unit;
-}
-
 /** Every value of a set in the law's order, with its unit; fields the law does not know last. */
 export function allValues(values: Record<string, unknown>): { symbol: string; text: string }[] {
   const known = PARAMETER_FIELDS.filter((f) => f.symbol in values).map((f) => {
     const value = values[f.symbol];
-    const unit = typeof value === "number" ? unitOf(f.unit, values.law) : "";
+    const typeset = unitOf(f, values.law);
+    const unit = typeof value === "number" && typeset !== "–" ? typeset : "";
     return { symbol: f.symbol, text: `${formatValue(value)}${unit ? ` ${unit}` : ""}` };
   });
   const knownSymbols = new Set(PARAMETER_FIELDS.map((f) => f.symbol));

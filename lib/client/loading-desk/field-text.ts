@@ -1,8 +1,8 @@
 /**
  * Unit and range of a parameter as shown beside its input, for the law in use: the field list
- * writes both laws' variants ("… (sqrtY) or … (linY)"); the form shows only the one that applies.
+ * writes both laws' range variants ("… (sqrtY); … (linY)"); the form shows only the one that applies.
  */
-import type { ParameterField } from "@/lib/scenario/parameter-fields";
+import { type ParameterField, unitOf } from "@/lib/scenario/parameter-fields";
 
 function pickVariant(text: string, law: string, separator: RegExp): string {
   const parts = text.split(separator).map((p) => p.trim());
@@ -11,8 +11,10 @@ function pickVariant(text: string, law: string, separator: RegExp): string {
   return (hit ?? parts[0]).replace(/\s*\((sqrtY|linY)\)\s*$/, "");
 }
 
+/** The unit beside the input; empty when dimensionless or a choice. */
 export function unitFor(f: ParameterField, law: string): string {
-  return pickVariant(f.unit, law, / or /);
+  const unit = unitOf(f, law);
+  return unit === "–" ? "" : unit;
 }
 
 export function rangeFor(f: ParameterField, law: string): string {

@@ -1,5 +1,5 @@
 /** Side-by-side comparison of two parameter sets: one row per field, flagged where they differ. */
-import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+import { PARAMETER_FIELDS, unitOf } from "@/lib/scenario/parameter-fields";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
 export interface DiffRow {
@@ -24,7 +24,7 @@ export function diffSets(left: ParameterSet, right: ParameterSet): DiffRow[] {
     const numeric = typeof a === "number" && typeof b === "number";
     return {
       symbol: f.symbol,
-      unit: f.unit,
+      unit: unitOf(f, left.law),
       left: show(a),
       right: show(b),
       differs: !Object.is(a, b),

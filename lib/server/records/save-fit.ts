@@ -38,7 +38,7 @@ function compute(records: LoadedRecord[], data: ReturnType<typeof saveFitSchema.
       residuals: replayResiduals(result.params, records),
       warnings: result.warnings,
       options: { law: data.law, modulus: data.modulus, base: data.base ? "given" : "demo" },
-      method: "identification per spec E (loops, Theil–Sen threshold line)",
+      method: "identification from the loading loops (Theil–Sen threshold line)",
     };
   }
   const params = toMaterialParams(data.params as ParameterSet);

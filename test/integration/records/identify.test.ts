@@ -58,7 +58,7 @@ describe("identification on a 2,000-point record through the service", () => {
     expect(set?.name).toBe(name);
     expect(set?.provenance.kind).toBe("fitted");
     expect(set?.provenance.records?.[0]).toContain(recordId);
-    expect(set?.provenance.method).toMatch(/spec E/);
+    expect(set?.provenance.method).toMatch(/identification from the loading loops/);
     const rms = Object.values(set?.provenance.residuals ?? {})[0];
     // The residual is the library's own replay validation of the identified set (spec E.11).
     const identified = await identifyRecords(db, t.members.editor, t.slug, {

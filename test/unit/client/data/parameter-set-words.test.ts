@@ -25,7 +25,7 @@ describe("parameter set rows", () => {
     expect(rows.map((r) => r.symbol)).toEqual(["E1", "dcrit", "law", "zz"]);
     expect(rows[0].text).toBe("11000 MPa");
     expect(rows[2].text).toBe("sqrtY");
-    expect(allValues({ a1: 0.6, law: "linY" })[0].text).toBe("0.6 MPa^-1");
-    expect(allValues({ a1: 0.6 })[0].text).toBe("0.6 MPa^-0.5");
+    expect(allValues({ a1: 0.6, law: "linY" })[0].text).toBe("0.6 MPa⁻¹");
+    expect(allValues({ a1: 0.6 })[0].text).toBe("0.6 MPa⁻⁰·⁵");
   });
 });

@@ -14,7 +14,9 @@ describe("parameter form", () => {
     render(<ParameterForm set={set} onValid={onValid} />);
     const e1 = screen.getByLabelText(/^E1/);
     fireEvent.change(e1, { target: { value: "abc" } });
-    await waitFor(() => expect(screen.getByText("E1 must be a finite number")).toBeTruthy());
+    await waitFor(() =>
+      expect(screen.getByText("E1 (Young's modulus, axis 1) must be a finite number")).toBeTruthy(),
+    );
     expect(e1.getAttribute("aria-invalid")).toBe("true");
     expect(onValid).not.toHaveBeenCalledWith(expect.objectContaining({ E1: Number.NaN }));
     onValid.mockClear();
@@ -31,25 +33,28 @@ describe("parameter form", () => {
     render(<ParameterForm set={set} onValid={onValid} />);
     fireEvent.change(screen.getByLabelText(/^a1/), { target: { value: "5" } });
     await waitFor(() =>
-      expect(screen.getByText(/a1 must be > 0 and a1·sqrt\(Y0_1\) < 1/)).toBeTruthy(),
+      expect(
+        screen.getByText(/a1 \(damage growth slope, axis 1\) must be > 0 and a1·sqrt\(Y0_1\) < 1/),
+      ).toBeTruthy(),
     );
     expect(onValid).not.toHaveBeenCalledWith(expect.objectContaining({ a1: 5 }));
   });
 
   it("shows the unit and range of the law in use", async () => {
     render(<ParameterForm set={{ ...set, law: "linY", a1: 2, a2: 2 }} onValid={() => {}} />);
-    expect(screen.getAllByText("MPa^-1").length).toBe(2);
+    expect(screen.getAllByText("MPa⁻¹").length).toBe(2);
     expect(screen.getByText("> 0 and 2·a1·Y0_1 < 1")).toBeTruthy();
   });
 });
 
 describe("parameter form: bad E1 values keep the last valid curves", () => {
-  const notice = /E1 needs a valid value: the charts show the last valid values of set A/;
+  const notice =
+    /E1 \(Young's modulus, axis 1\) needs a valid value: the charts show the last valid values of set A/;
 
   for (const [typed, message] of [
     ["", /E1 /],
-    ["abc", /E1 must be a finite number/],
-    ["-5", /E1 must be > 0/],
+    ["abc", /E1 \(Young's modulus, axis 1\) must be a finite number/],
+    ["-5", /E1 \(Young's modulus, axis 1\) must be > 0/],
     ["1e308", /E1 = 1e\+308 MPa is far outside the usual 100 MPa to 500 GPa/],
   ] as const) {
     it(`"${typed}" names E1, says the charts keep the last valid values and passes nothing on`, async () => {

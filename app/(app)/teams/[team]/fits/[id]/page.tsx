@@ -37,7 +37,9 @@ export default async function FitPage({
         Fit → {fit.parameterSetName ?? "(parameter set deleted)"}
       </h2>
       <p className="mt-1 text-sm text-ink-soft">
-        {fit.method === "identify" ? "Identification per spec E" : "Levenberg–Marquardt refinement"}
+        {fit.method === "identify"
+          ? "Identification from the loading loops"
+          : "Levenberg–Marquardt refinement"}
         , {fit.createdAt.slice(0, 10)} by {fit.createdBy?.name ?? "former member"}
       </p>
       {fit.parameterSetId && can(ctx.role, "scenario:edit") ? (
