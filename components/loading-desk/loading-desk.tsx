@@ -20,6 +20,7 @@ import { ChartGrid } from "./chart-grid";
 import { ExportPanel } from "./export-panel";
 import { MeaningsPanel } from "./meanings-panel";
 import { ParameterForm } from "./parameter-form";
+import { ReadOnlyBanner } from "./read-only-banner";
 import { PathEditor } from "./path-editor";
 import { ResultsTable } from "./results-table";
 import { RunErrors } from "./run-errors";
@@ -35,6 +36,8 @@ export interface LoadingDeskProps {
    */
   initialScenario: OpenedScenario;
   readOnly?: boolean;
+  /** The team named in the read-only banner (who may edit). */
+  teamName?: string;
   /** Saving a revision; without it the save button asks to sign in. */
   onSave?: (file: ScenarioFileJson) => void | Promise<void>;
   /** Keep the state in the address so it can be sent as a link (the sandbox). */
@@ -48,6 +51,7 @@ export interface LoadingDeskProps {
 export function LoadingDesk({
   initialScenario,
   readOnly,
+  teamName,
   onSave,
   syncUrl,
   overlays,
@@ -85,6 +89,7 @@ export function LoadingDesk({
       data-testid="loading-desk"
       data-epoch={m.epoch}
     >
+      {readOnly ? <ReadOnlyBanner teamName={teamName} /> : null}
       <div className="flex flex-wrap items-center gap-3">
         <label htmlFor="scenario-name" className="sr-only">
           Scenario name

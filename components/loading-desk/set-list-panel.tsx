@@ -84,7 +84,13 @@ export function SetListPanel({
                   onClick={() => onSelect(e.set.id)}
                   aria-pressed={active}
                 >
-                  {active ? "Editing" : "Edit values"}
+                  {readOnly
+                    ? active
+                      ? "Shown"
+                      : "Show values"
+                    : active
+                      ? "Editing"
+                      : "Edit values"}
                 </button>
                 {!readOnly && (
                   <>
