@@ -47,3 +47,40 @@ export function damageAtPeak(s: number, a: number, Y0: number): number {
   const disc = c * c - 4 * a * (s - r);
   return disc <= 0 ? c / 2 : (c - Math.sqrt(disc)) / 2;
 }
+
+/**
+ * Grid scan, then golden-section between the best grid point's neighbours. The error of k6 is
+ * flat for small values, so a plain golden-section on the whole range can settle on the wrong end;
+ * the grid (0, then log-spaced from lo + span·1e-3 to hi) finds the right valley first (issue 14).
+ */
+export function scannedSearch(
+  f: (x: number) => number,
+  lo: number,
+  hi: number,
+  tol = 1e-6,
+  points = 24,
+): number {
+  const first = (hi - lo) * 1e-3;
+  const grid = [lo];
+  for (let i = 0; i < points; i++)
+    grid.push(lo + first * ((hi - lo) / first) ** (i / (points - 1)));
+  const values = grid.map(f);
+  let best = 0;
+  values.forEach((v, i) => {
+    if (v < values[best]) best = i;
+  });
+  const left = grid[Math.max(0, best - 1)];
+  const right = grid[Math.min(grid.length - 1, best + 1)];
+  const x = goldenSection(f, left, right, tol);
+  return f(x) <= values[best] ? x : grid[best];
+}
+
+/** A plain-words warning when a one-dimensional search ended on a bound of its range. */
+export function boundWarning(label: string, value: number, lo: number, hi: number): string | null {
+  const eps = 1e-6 * Math.max(1, Math.abs(hi - lo));
+  if (Math.abs(value - lo) <= eps)
+    return `${label} sits on its lower bound ${lo}: the records may not inform it`;
+  if (Math.abs(value - hi) <= eps)
+    return `${label} sits on its upper bound ${hi}: the records may not inform it`;
+  return null;
+}

@@ -10,6 +10,7 @@ import { couplingFromEquibiaxial, couplingFromOffAxis, couplingFromTransverse } 
 import { failureDamage } from "./failure-damage";
 import { identifyAxis, poissonFromRamp, type AxisIdentification } from "./identify-axis";
 import { measureLoops } from "./loop-moduli";
+import { boundWarning } from "./golden-section";
 import { canReplay } from "./replay";
 import { checkParams } from "@/lib/mechanics/validate";
 import { shearWeightByReplay, shearWeightClosedForm } from "./shear-weight";
@@ -151,10 +152,14 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
     );
     const G0 = initialModulus(clean.strain, clean.stress, loops);
     if (G0 && !isotropic) set("G12", G0.E0);
+    const extra: Warning[] = [];
     if (loops.length >= 2 && p.frame === "fixed") {
-      set("k6", isotropic ? shearWeightClosedForm(loops, p) : shearWeightByReplay(clean, p));
+      const k6 = isotropic ? shearWeightClosedForm(loops, p) : shearWeightByReplay(clean, p);
+      set("k6", k6);
+      const onBound = boundWarning("shear weight k6", k6, 0, 3);
+      if (onBound) extra.push(onBound);
     }
-    reports.set(record.id, { axis: null, extra: [] });
+    reports.set(record.id, { axis: null, extra });
     break;
   }
 
