@@ -3,6 +3,7 @@ import { existsSync } from "node:fs";
 import type { NextConfig } from "next";
 import { PHASE_DEVELOPMENT_SERVER, PHASE_PRODUCTION_BUILD } from "next/constants";
 
+import { PROXY_BODY_LIMIT } from "./lib/server/http/body-limits";
 import { buildComputeWorker } from "./lib/server/compute/build-worker";
 import { computeWorkerFile } from "./lib/server/compute/worker-file";
 
@@ -15,6 +16,9 @@ const nextConfig: NextConfig = {
   // postgres and nodemailer are Node-only: keep them out of the server bundle graph. piscina
   // starts worker threads from a file on disk, which bundling would break.
   serverExternalPackages: ["postgres", "nodemailer", "piscina"],
+  // The proxy's copy of a body is cut at this size (10 MB by default), which made the 20 MB
+  // upload and 64 MB import limits unreachable; the routes enforce their own limits (413).
+  experimental: { proxyClientMaxBodySize: PROXY_BODY_LIMIT },
 };
 
 /**

@@ -3,6 +3,8 @@
  * process. Contract (scenario-file.md): results on stdout only; exit 0 for every run, failed
  * points included; exit 2 with one line on stderr for bad arguments or a bad file.
  */
+import { findTooDeep, tooDeepMessage } from "@/lib/shared/json-depth";
+
 import { parseDriveArgs, DRIVE_USAGE } from "./drive-args";
 import { runScenarioFile, type PathRunner } from "./run-scenario-file";
 
@@ -60,6 +62,11 @@ export function runDriveCommand(argv: readonly string[], io: DriveIo, run: PathR
     text = io.readFile(args.file);
   } catch (err) {
     io.stderr(describeReadError(args.file, err));
+    return EXIT_BAD_INPUT;
+  }
+  const tooDeep = findTooDeep(text);
+  if (tooDeep) {
+    io.stderr(`${args.file}: ${tooDeepMessage(tooDeep)}`);
     return EXIT_BAD_INPUT;
   }
   let json: unknown;

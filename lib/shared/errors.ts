@@ -1,4 +1,8 @@
-import { classifyDbError, DB_UNAVAILABLE_MESSAGE } from "../server/http/db-errors";
+import {
+  BAD_TEXT_MESSAGE,
+  classifyDbError,
+  DB_UNAVAILABLE_MESSAGE,
+} from "../server/http/db-errors";
 
 // Two kinds of failure. An AppError is expected (bad input, not allowed, expired link): it
 // carries a stable code like "forbidden:team" and a message written for the user, optionally
@@ -42,10 +46,14 @@ export function toActionError(error: unknown): Extract<ActionResult, { ok: false
     return { ok: false, code: error.code, message: error.message, field: error.field };
   }
   // An outage is not a bug: say so plainly, so the person waits instead of retyping.
-  if (classifyDbError(error)?.kind === "unavailable") {
+  const db = classifyDbError(error);
+  if (db?.kind === "unavailable") {
     console.error("[action] database unavailable:", (error as Error)?.message);
     return { ok: false, code: "unavailable:database", message: DB_UNAVAILABLE_MESSAGE };
   }
+  // A NUL byte PostgreSQL refuses is the person's input, not our fault: the API's answer.
+  if (db?.kind === "bad-text")
+    return { ok: false, code: "invalid:text", message: BAD_TEXT_MESSAGE };
   // Unexpected: keep the details in the server log only.
   console.error("[unexpected]", error);
   return { ok: false, code: "internal", message: MASKED_MESSAGE };

@@ -1,19 +1,19 @@
 import "server-only";
 
 import { AppError } from "@/lib/shared/errors";
+import { findTooDeep, tooDeepMessage } from "@/lib/shared/json-depth";
 
-export const BODY_LIMITS = {
-  /** Small forms: names, comments, verdicts. */
-  small: 64 * 1024,
-  /** A scenario file with its path (long generated cycle paths stay well below this). */
-  scenario: 4 * 1024 * 1024,
-  /** A whole team export. */
-  teamImport: 64 * 1024 * 1024,
-} as const;
+import { formatBytes } from "./body-limits";
 
-function tooLarge(limit: number): AppError {
-  const size = limit >= 1024 * 1024 ? `${limit / 1024 / 1024} MB` : `${limit / 1024} KB`;
-  return new AppError("invalid:too-large", `The request body is larger than ${size}.`);
+export { BODY_LIMITS } from "./body-limits";
+
+/** 413 in the user's words: how big the upload is (when known) and what this route takes. */
+function tooLarge(limit: number, size: number | null): AppError {
+  const what = size === null ? `more than ${formatBytes(limit)}` : formatBytes(size);
+  return new AppError(
+    "invalid:too-large",
+    `The upload is ${what}; this route takes at most ${formatBytes(limit)}.`,
+  );
 }
 
 /**
@@ -26,7 +26,7 @@ export async function readJsonBody(
   options: { optional?: boolean } = {},
 ): Promise<unknown> {
   const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > limit) throw tooLarge(limit);
+  if (declared > limit) throw tooLarge(limit, declared);
   const reader = request.body?.getReader();
   if (!reader) {
     if (options.optional) return undefined;
@@ -43,7 +43,7 @@ export async function readJsonBody(
     size += value.byteLength;
     if (size > limit) {
       await reader.cancel();
-      throw tooLarge(limit);
+      throw tooLarge(limit, null);
     }
     chunks.push(value);
   }
@@ -52,6 +52,8 @@ export async function readJsonBody(
     if (options.optional) return undefined;
     throw new AppError("invalid:body", "Send a JSON body.");
   }
+  const tooDeep = findTooDeep(text);
+  if (tooDeep) throw new AppError("invalid:json", tooDeepMessage(tooDeep));
   let value: unknown;
   try {
     value = JSON.parse(text);

@@ -8,6 +8,10 @@ export type DbFailure = { kind: "unavailable"; retryAfterSeconds: number } | { k
 
 export const DB_RETRY_AFTER_SECONDS = 5;
 
+/** What the API and the server actions both say when PostgreSQL refuses a NUL byte in text. */
+export const BAD_TEXT_MESSAGE =
+  "The request contains a character that cannot be stored (a NUL byte).";
+
 export const DB_UNAVAILABLE_MESSAGE =
   "The database is not reachable at the moment. Please try again in a few seconds.";
 

@@ -1,6 +1,10 @@
 import "server-only";
 
-import { classifyDbError, DB_UNAVAILABLE_MESSAGE } from "@/lib/server/http/db-errors";
+import {
+  BAD_TEXT_MESSAGE,
+  classifyDbError,
+  DB_UNAVAILABLE_MESSAGE,
+} from "@/lib/server/http/db-errors";
 import { isAppError, MASKED_MESSAGE } from "@/lib/shared/errors";
 import { DetailedAppError } from "@/lib/server/workspace/errors";
 
@@ -61,7 +65,7 @@ export function errorResponse(error: unknown): Response {
       {
         error: {
           code: "invalid:text",
-          message: "The request contains a character that cannot be stored (a NUL byte).",
+          message: BAD_TEXT_MESSAGE,
         },
       },
       400,

@@ -6,6 +6,7 @@ import type { Actor } from "@/lib/server/accounts/actor";
 
 import { actorFromRequest } from "./request-actor";
 import { errorResponse, jsonResponse } from "./respond";
+import { refuseAnonymousWrite } from "./sign-in-first";
 
 export interface RouteInput<P> {
   request: Request;
@@ -34,6 +35,7 @@ export function apiRoute<P>(handler: (input: RouteInput<P>) => Promise<unknown>)
       const db = getDb();
       const session = await actorFromRequest(request);
       setCookie = session.setCookie;
+      refuseAnonymousWrite(request, session.actor);
       const params = await context.params;
       const query = Object.fromEntries(new URL(request.url).searchParams);
       const result = await handler({ request, params, actor: session.actor, db, query });

@@ -17,6 +17,7 @@ import { NOT_FOUND_MESSAGE } from "@/lib/server/access/team-access";
 import { actorFromRequest } from "./request-actor";
 import { errorResponse, jsonResponse } from "./respond";
 import { Created, type RouteInput } from "./route";
+import { refuseAnonymousWrite } from "./sign-in-first";
 
 /** Per token (and per signed-in user where a route asks): generous for scripts, a brake for loops. */
 export const API_RATE_LIMIT: RateLimitRule = { limit: 120, windowMs: 60 * 1000 };
@@ -78,6 +79,7 @@ export function tokenRoute<P>(
         setCookie = session.setCookie;
         actor = session.actor;
       }
+      refuseAnonymousWrite(request, actor);
       // Tokens are always limited; the app's own pages (sessions) only where a route asks.
       const key = token
         ? `api-token:${token.tokenId}`

@@ -4,6 +4,7 @@ import { z } from "zod";
 
 import { REVIEW_STATES } from "@/lib/shared/validations/workspace";
 import { provenanceSchema } from "@/lib/shared/validations/parameter-sets";
+import { INT4_MAX } from "@/lib/shared/validations/int4";
 
 // The team export file. People travel as e-mail + name (ids mean nothing elsewhere); keys are
 // the exporting installation's ids, used only to tie replies to their parent inside the file.
@@ -19,13 +20,13 @@ const commentSchema = z.object({
   parentKey: z.string().min(1).max(64).nullable(),
   author: person,
   body: z.string().min(1).max(5000),
-  increment: z.number().int().min(0).nullable(),
+  increment: z.number().int().min(0).max(INT4_MAX).nullable(),
   createdAt: iso,
   editedAt: iso.nullable(),
 });
 
 const revisionSchema = z.object({
-  number: z.number().int().min(1),
+  number: z.number().int().min(1).max(INT4_MAX),
   author: person,
   message: z.string().max(2000),
   file: z.record(z.string(), z.unknown()),

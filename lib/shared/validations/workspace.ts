@@ -2,6 +2,8 @@ import { z } from "zod";
 
 import { reviewState } from "@/db/schema/scenarios";
 
+import { INT4_MAX } from "./int4";
+
 // Inputs of the team workspace API. The same schemas serve forms and route handlers; the
 // scenario file and parameter values are checked by the scenario module's own schemas.
 
@@ -57,7 +59,8 @@ export const saveRevisionSchema = z.object({
   baseRevision: z
     .number("Name the revision you started from (baseRevision).")
     .int()
-    .min(1, "Name the revision you started from (baseRevision)."),
+    .min(1, "Name the revision you started from (baseRevision).")
+    .max(INT4_MAX, "No revision has that number (baseRevision)."),
   message: messageSchema.default(""),
   file: z.unknown(),
 });
@@ -66,7 +69,12 @@ export type SaveRevisionInput = z.input<typeof saveRevisionSchema>;
 export const commentSchema = z.object({
   body: shortText(5000, "comment").min(1, "Write something first."),
   parentId: z.uuid("Unknown comment to reply to.").optional(),
-  increment: z.number("The increment must be a number.").int().min(0).optional(),
+  increment: z
+    .number("The increment must be a number.")
+    .int()
+    .min(0)
+    .max(INT4_MAX, "No increment has that number.")
+    .optional(),
 });
 export type CommentInput = z.input<typeof commentSchema>;
 

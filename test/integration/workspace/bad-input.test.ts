@@ -132,7 +132,7 @@ describe("bad input gets a clear 4xx JSON error and saves nothing", () => {
         }),
         status: 413,
         code: "invalid:too-large",
-        message: /larger than 4 MB/,
+        message: /takes at most 4 MB/,
       },
       {
         handler: setsRoute.POST,

@@ -1,0 +1,26 @@
+// No `server-only` here: next.config.ts reads the largest limit to size the proxy's body copy.
+
+export const BODY_LIMITS = {
+  /** Small forms: names, comments, verdicts. */
+  small: 64 * 1024,
+  /** A scenario file with its path (long generated cycle paths stay well below this). */
+  scenario: 4 * 1024 * 1024,
+  /** A curve file of up to 10 MB travelling as JSON text (escaping can double it). */
+  upload: 20 * 1024 * 1024,
+  /** A whole team export. */
+  teamImport: 64 * 1024 * 1024,
+} as const;
+
+/**
+ * Next copies a request body for the proxy (proxy.ts) and hands the route only the first
+ * `proxyClientMaxBodySize` bytes; one byte past the largest route limit lets every route see
+ * that a body is too large (413) instead of parsing a cut-off body ("not valid JSON").
+ */
+export const PROXY_BODY_LIMIT = Math.max(...Object.values(BODY_LIMITS)) + 1;
+
+/** "20 MB", "64 KB": the size as a person reads it. */
+export function formatBytes(bytes: number): string {
+  if (bytes >= 1024 * 1024) return `${Math.round((bytes / 1024 / 1024) * 10) / 10} MB`;
+  if (bytes >= 1024) return `${Math.round((bytes / 1024) * 10) / 10} KB`;
+  return `${bytes} bytes`;
+}
