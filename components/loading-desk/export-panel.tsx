@@ -3,7 +3,13 @@
 import { useState } from "react";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
 import { allSetsCsv, setCsv } from "@/lib/client/loading-desk/csv-export";
-import { resultsCsvName, scenarioFileName } from "@/lib/client/loading-desk/file-names";
+import {
+  provenanceName,
+  resultsCsvName,
+  scenarioFileName,
+} from "@/lib/client/loading-desk/file-names";
+import { EXPORT_SIGNIFICANT_DIGITS } from "@/lib/client/loading-desk/export-columns";
+import { provenanceText } from "@/lib/client/loading-desk/provenance";
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import {
   fromScenario,
@@ -19,6 +25,8 @@ export interface ExportPanelProps {
   entries: SetEntry[];
   store: ResultsStore;
   file: ScenarioFileJson;
+  /** "revision 4" on a saved revision, null on scratch data; written into the provenance file. */
+  revision?: string | null;
   readOnly?: boolean;
   onImport: (state: LoadingDeskState) => void;
 }
@@ -26,23 +34,59 @@ export interface ExportPanelProps {
 const btn =
   "rounded-md border border-glaze-line bg-white px-3 py-1.5 text-sm hover:bg-glaze-deep disabled:opacity-40";
 
-export function ExportPanel({ name, entries, store, file, readOnly, onImport }: ExportPanelProps) {
+export function ExportPanel({
+  name,
+  entries,
+  store,
+  file,
+  revision = null,
+  readOnly,
+  onImport,
+}: ExportPanelProps) {
   const [which, setWhich] = useState("all");
   const [importErrors, setImportErrors] = useState<string[]>([]);
   const [notice, setNotice] = useState("");
 
-  const exportCsv = () => {
-    const done = entries.flatMap((e) => {
+  const finished = () =>
+    entries.flatMap((e) => {
       const buffer = store.get(e.set.id)?.buffer;
-      return buffer ? [{ id: e.set.id, label: e.set.label, buffer }] : [];
+      return buffer ? [{ set: e.set, buffer }] : [];
     });
+  const chosen = () => {
+    const done = finished();
+    if (which === "all") return { label: null, done };
+    const one = done.filter((d) => d.set.id === which);
+    return { label: one.length ? `${one[0].set.id} ${one[0].set.label}` : null, done: one };
+  };
+
+  // The byte-order mark makes spreadsheets open the file as UTF-8 (σ, ε in the header); pandas
+  // and lib/csv skip it.
+  const BOM = "\uFEFF";
+  const exportCsv = () => {
+    const { label, done } = chosen();
     if (which === "all") {
-      downloadText(resultsCsvName(name, null), allSetsCsv(done), "text/csv");
-      return;
+      const rows = done.map((d) => ({ id: d.set.id, buffer: d.buffer }));
+      downloadText(resultsCsvName(name, null), BOM + allSetsCsv(rows), "text/csv;charset=utf-8");
+    } else if (done.length) {
+      downloadText(
+        resultsCsvName(name, label),
+        BOM + setCsv(done[0].buffer),
+        "text/csv;charset=utf-8",
+      );
     }
-    const one = done.find((d) => d.id === which);
-    if (one)
-      downloadText(resultsCsvName(name, `${one.id} ${one.label}`), setCsv(one.buffer), "text/csv");
+  };
+
+  const exportProvenance = () => {
+    const { label, done } = chosen();
+    if (which !== "all" && !done.length) return;
+    const text = provenanceText({
+      scenario: name,
+      revision,
+      sets: done.map((d) => d.set),
+      path: file.path,
+      csvFile: resultsCsvName(name, label),
+    });
+    downloadText(provenanceName(name, label), text, "application/json");
   };
 
   const importFile = async (f: File | undefined) => {
@@ -115,7 +159,15 @@ export function ExportPanel({ name, entries, store, file, readOnly, onImport }: 
         <button type="button" className={btn} onClick={exportCsv}>
           Download CSV
         </button>
+        <button type="button" className={btn} onClick={exportProvenance}>
+          Download provenance
+        </button>
       </div>
+      <p className="text-xs text-ink-faint">
+        One header line with units (σ11 [MPa], ε11 [-]); numbers to {EXPORT_SIGNIFICANT_DIGITS}{" "}
+        significant digits. The provenance file (same name, .provenance.json) says which scenario,
+        revision and values made it, when, and carries the caution.
+      </p>
       <p className="text-xs text-ink-faint">Chart images: the PNG and SVG buttons on each chart.</p>
       <div role={importErrors.length ? "alert" : "status"} aria-live="polite">
         {notice && <p className="text-sm text-verdigris-dark">{notice}</p>}

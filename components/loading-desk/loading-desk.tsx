@@ -46,6 +46,8 @@ export interface LoadingDeskProps {
   overlays?: readonly ChartOverlay[];
   /** Team library sets the set picker offers beside the presets. */
   library?: readonly LibraryChoice[];
+  /** "revision 4" when a saved revision is open; stamped on exports. Null on scratch data. */
+  revision?: string | null;
 }
 
 export function LoadingDesk({
@@ -56,6 +58,7 @@ export function LoadingDesk({
   syncUrl,
   overlays,
   library,
+  revision = null,
 }: LoadingDeskProps) {
   const [m, dispatch] = useReducer(loadingDeskReducer, initialScenario, (s) =>
     initModel(fromScenario(s)),
@@ -189,6 +192,7 @@ export function LoadingDesk({
               entries={m.entries}
               store={store}
               file={file}
+              revision={revision}
               readOnly={readOnly}
               onImport={(state) => dispatch({ type: "replace", state })}
             />

@@ -111,6 +111,7 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
         readOnly={!editable}
         onSave={editable ? (f) => setPending(f) : undefined}
         overlays={records.overlays}
+        revision={`revision ${number}`}
       />
     </div>
   );

@@ -15,13 +15,14 @@ export const CHANNELS = [
 export type Channel = (typeof CHANNELS)[number];
 export type ColumnMapping = Partial<Record<Channel, number>>;
 
-// Most specific first: "shear strain" must not be taken for the axial strain.
+// Most specific first: "shear strain" must not be taken for the axial strain. The symbols
+// (ε22, σ12) are what the loading desk's own results CSV writes.
 const PATTERNS: [Channel, RegExp][] = [
   ["shearStrain", /shear.*strain|gamma|γ|gam(12)?\b|strain.*12|e12/],
-  ["shearStress", /shear.*stress|tau|τ|sig(ma)?.*12|s12/],
+  ["shearStress", /shear.*stress|tau|τ|sig(ma)?.*12|σ.*12|s12/],
   [
     "transverseStrain",
-    /(transverse|lateral|width).*strain|strain.*(transverse|lateral|22|yy)|eps.*(22|yy)|e22/,
+    /(transverse|lateral|width).*strain|strain.*(transverse|lateral|22|yy)|(eps|ε).*(22|yy)|e22/,
   ],
   ["time", /^(time|t|elapsed|sec|seconds)\b|time/],
   ["strain", /strain|eps|ε|elongation|extension/],

@@ -16,6 +16,16 @@ export function csvNumber(value: number): string {
   return String(value);
 }
 
+/**
+ * A number cell rounded to `digits` significant digits, then in its shortest form: float noise
+ * such as 0.000030000000000000004 is gone (0.00003), whole numbers stay whole, -0 is "0".
+ * Non-finite values are written as String() writes them.
+ */
+export function csvSignificant(value: number, digits: number): string {
+  if (!Number.isFinite(value)) return String(value);
+  return String(Number(value.toPrecision(digits)));
+}
+
 /** A text cell: formula starts neutralised first, then quoted if it needs it. */
 export function csvText(value: string): string {
   const safe = FORMULA_START.test(value) ? `'${value}` : value;

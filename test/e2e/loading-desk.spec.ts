@@ -5,7 +5,7 @@
  */
 import { readFileSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { RESULT_COLUMNS } from "@/lib/mechanics/types";
+import { EXPORT_HEADER } from "@/lib/client/loading-desk/csv-export";
 import {
   launchBrowser,
   newContext,
@@ -140,7 +140,7 @@ describe("sandbox loading desk", () => {
     await screenshot(page, "loading-desk-two-sets");
   });
 
-  it("exports CSV with the contract's columns", async () => {
+  it("exports CSV with one header line of symbols and units", async () => {
     await page.getByLabel("Results CSV of").selectOption("A");
     const [download] = await Promise.all([
       page.waitForEvent("download"),
@@ -148,8 +148,12 @@ describe("sandbox loading desk", () => {
     ]);
     expect(download.suggestedFilename()).toMatch(/^craquelure-.*-set-a-.*\.csv$/);
     const text = readFileSync((await download.path())!, "utf8");
-    const lines = text.trimEnd().split("\n");
-    expect(lines[0]).toBe(RESULT_COLUMNS.join(","));
+    const lines = text
+      .replace(/^\uFEFF/, "")
+      .trimEnd()
+      .split("\n");
+    expect(lines[0]).toBe(EXPORT_HEADER);
+    expect(lines[0]).toContain("σ11 [MPa]");
     expect(lines).toHaveLength(252);
   });
 

@@ -5,6 +5,7 @@ import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
 import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
 import {
   chartImageName,
+  provenanceName,
   resultsCsvName,
   scenarioFileName,
   slug,
@@ -92,5 +93,24 @@ describe("clipboard and file names", () => {
     expect(chartImageName("", "Stress–strain", d)).toBe(
       "craquelure-untitled-stress-strain-2026-03-04",
     );
+    expect(provenanceName("Plate A", "B: stiffer", d)).toBe(
+      "craquelure-plate-a-set-b-stiffer-2026-03-04.provenance.json",
+    );
+  });
+
+  it("keeps the quantities' symbols in chart file names (issue 15 item 3)", () => {
+    const d = new Date("2026-03-04T10:00:00Z");
+    expect(chartImageName("Plate A", "Stress–strain: σ11 against ε11", d)).toBe(
+      "craquelure-plate-a-stress-strain-σ11-against-ε11-2026-03-04",
+    );
+    expect(chartImageName("Plate A", "Stress–strain: σ12 against γ12", d)).toContain(
+      "σ12-against-γ12",
+    );
+    expect(slug("Work, stored and dissipated energy Φ")).toBe(
+      "work-stored-and-dissipated-energy-φ",
+    );
+    // Cut at 48 characters, never inside a symbol and never ending in a dash.
+    expect(Array.from(slug("σ11 ".repeat(30))).length).toBeLessThanOrEqual(48);
+    expect(slug("σ11 ".repeat(30))).not.toMatch(/-$/);
   });
 });
