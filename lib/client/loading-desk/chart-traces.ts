@@ -81,7 +81,11 @@ export function buildChart(
         const row = marks[key];
         if (row === null) continue;
         extra.rows.push(row);
-        extra.names.push(MARK_NAMES[key]);
+        extra.names.push(
+          key === "failure" && marks.broken !== null
+            ? `family ${marks.broken} breaks (d${marks.broken} = dmax)`
+            : MARK_NAMES[key],
+        );
         extra.symbols.push(MARK_SYMBOLS[key]);
       }
     }

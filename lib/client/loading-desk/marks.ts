@@ -1,6 +1,8 @@
 /**
  * Notable rows of a run, marked on the charts: damage onset (first row with d1 or d2 > 0),
  * peak (largest |stress| of the chosen component) and failure (first row flagged failed).
+ * When the path goes on past that row (onFailure 'continue'), the row is where a crack family
+ * broke (spec C.7: d := dmax, no further evolution), and the mark says which family.
  */
 import type { ResultColumns } from "@/lib/mechanics/types";
 
@@ -8,6 +10,8 @@ export interface RunMarks {
   onset: number | null;
   peak: number | null;
   failure: number | null;
+  /** the family that broke at the failure row when rows follow it; null when the path stopped */
+  broken: 1 | 2 | null;
 }
 
 export function findMarks(
@@ -29,5 +33,7 @@ export function findMarks(
       peak = i;
     }
   }
-  return { onset, peak, failure };
+  let broken: 1 | 2 | null = null;
+  if (failure !== null && failure < rows - 1) broken = cols.d1[failure] >= cols.d2[failure] ? 1 : 2;
+  return { onset, peak, failure, broken };
 }

@@ -44,6 +44,14 @@ describe("chart traces", () => {
     expect(marks.y[1]).toBe(50);
   });
 
+  it("calls the failure mark a break of its family when the path goes on past it", () => {
+    const src = source("A", 100);
+    for (let i = 0; i < 100; i++) src.columns.failed[i] = i >= 70 ? 1 : 0;
+    const built = buildChart(stressStrainDef("eps11", "sig11"), [src], null);
+    const marks = built.traces.find((t) => t.meta.series === "marks")!;
+    expect(marks.text).toEqual(["damage onset", "peak", "family 1 breaks (d1 = dmax)"]);
+  });
+
   it("skips sets without rows and draws every series of a fixed chart", () => {
     const energy = FIXED_CHARTS.find((c) => c.key === "energy")!;
     const built = buildChart(energy, [source("A", 20), { ...source("B", 0) }], null);

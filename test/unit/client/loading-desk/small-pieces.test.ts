@@ -11,6 +11,7 @@ import {
   slug,
 } from "@/lib/client/loading-desk/file-names";
 import { findMarks } from "@/lib/client/loading-desk/marks";
+import { E, S, leg, run } from "../../mechanics/helpers";
 import { PRESETS } from "@/lib/client/loading-desk/presets";
 import { ResultBuffer, sliceChunk } from "@/lib/client/loading-desk/result-buffer";
 import { rowsToTsv } from "@/lib/client/loading-desk/selection-text";
@@ -68,8 +69,22 @@ describe("marks", () => {
       if (name === "failed") return i >= 5 ? 1 : 0;
       return 0;
     });
-    expect(findMarks(c, 6, "sig11")).toEqual({ onset: 2, peak: 4, failure: 5 });
-    expect(findMarks(c, 2, "sig11")).toEqual({ onset: null, peak: 1, failure: null });
+    expect(findMarks(c, 6, "sig11")).toEqual({ onset: 2, peak: 4, failure: 5, broken: null });
+    expect(findMarks(c, 2, "sig11")).toEqual({ onset: null, peak: 1, failure: null, broken: null });
+  });
+
+  it("names the family that broke when the core goes on past dcrit ('continue', spec C.7)", () => {
+    // uniaxial strain along 1 well past dcrit = 0.45 (D.4: d1 reaches dcrit near eps11 = 0.021)
+    const legs = [leg([E, S, S], [0.03, 0, 0], 300)];
+    const goesOn = run({ onFailure: "continue" }, legs);
+    const m = findMarks(goesOn.columns, goesOn.rows, "sig11");
+    expect(m.failure).not.toBeNull();
+    expect(m.failure).toBeLessThan(goesOn.rows - 1);
+    expect(m.broken).toBe(1);
+    const stops = run({ onFailure: "stop" }, legs);
+    const s = findMarks(stops.columns, stops.rows, "sig11");
+    expect(s.failure).toBe(stops.rows - 1);
+    expect(s.broken).toBeNull();
   });
 });
 
