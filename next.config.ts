@@ -3,7 +3,8 @@ import { existsSync } from "node:fs";
 import type { NextConfig } from "next";
 import { PHASE_DEVELOPMENT_SERVER, PHASE_PRODUCTION_BUILD } from "next/constants";
 
-import { PROXY_BODY_LIMIT } from "./lib/server/http/body-limits";
+import { ACTION_BODY_LIMIT, PROXY_BODY_LIMIT } from "./lib/server/http/body-limits";
+import { API_SECURITY_HEADERS } from "./lib/server/http/security-headers";
 import { buildComputeWorker } from "./lib/server/compute/build-worker";
 import { computeWorkerFile } from "./lib/server/compute/worker-file";
 
@@ -16,9 +17,21 @@ const nextConfig: NextConfig = {
   // postgres and nodemailer are Node-only: keep them out of the server bundle graph. piscina
   // starts worker threads from a file on disk, which bundling would break.
   serverExternalPackages: ["postgres", "nodemailer", "piscina"],
-  // The proxy's copy of a body is cut at this size (10 MB by default), which made the 20 MB
-  // upload and 64 MB import limits unreachable; the routes enforce their own limits (413).
-  experimental: { proxyClientMaxBodySize: PROXY_BODY_LIMIT },
+  // The proxy (pages and server actions only) copies a body up to this size; the API routes,
+  // which the proxy skips, enforce their own limits (413).
+  experimental: {
+    proxyClientMaxBodySize: PROXY_BODY_LIMIT,
+    serverActions: { bodySizeLimit: ACTION_BODY_LIMIT },
+  },
+  // The proxy stamps pages with their per-request policy; JSON answers get a fixed one here.
+  async headers() {
+    return [
+      {
+        source: "/api/:path*",
+        headers: Object.entries(API_SECURITY_HEADERS).map(([key, value]) => ({ key, value })),
+      },
+    ];
+  },
 };
 
 /**

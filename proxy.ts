@@ -6,6 +6,9 @@ import { newNonce, securityHeaders } from "@/lib/server/http/security-headers";
 // Next 16's middleware file. Two jobs, both from headers alone (no database work here):
 // refuse state-changing requests from other origins, and attach the security headers with a
 // per-request script nonce. Sessions and team access are checked where the data is read.
+// It does not run for /api: Next copies every request body the proxy sees into memory first, so
+// a stranger could make it hold up to the largest upload limit before any route answered 401.
+// The API wrappers refuse cross-origin writes themselves; next.config.ts sets their headers.
 export function proxy(request: NextRequest) {
   const refuse = isCrossOriginWrite({
     method: request.method,
@@ -32,6 +35,6 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  // Static assets never change state and run no inline script; skip them.
-  matcher: ["/((?!_next/static|_next/image|favicon.ico|icon.svg|fonts/).*)"],
+  // Static assets never change state and run no inline script; the API has its own guards.
+  matcher: ["/((?!api/|_next/static|_next/image|favicon.ico|icon.svg|fonts/).*)"],
 };

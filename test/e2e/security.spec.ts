@@ -55,14 +55,20 @@ describe("security headers and hostile text", () => {
       expect(response.headers.get("referrer-policy")).toBe("strict-origin-when-cross-origin");
     }
     expect(api.status).toBe(404);
-    // A write sent by another site's page is refused before any route runs.
+    // The API's answers are never pages: nothing may load or frame from them.
+    expect(api.headers.get("content-security-policy")).toBe(
+      "default-src 'none'; frame-ancestors 'none'",
+    );
+    // A write sent by another site's page is refused before the route reads anything.
     const crossSite = await fetch(`${baseUrl()}/api/v1/teams/${TEAM}/scenarios`, {
       method: "POST",
       headers: { origin: "https://elsewhere.example", "content-type": "application/json" },
       body: JSON.stringify({ name: "x" }),
     });
     expect(crossSite.status).toBe(403);
-    expect(await crossSite.text()).toBe("Cross-origin request refused.");
+    expect(((await crossSite.json()) as { error: { message: string } }).error.message).toBe(
+      "Cross-origin request refused.",
+    );
   });
 
   it("computes and draws the sandbox with no policy violation", async () => {

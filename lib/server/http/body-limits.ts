@@ -11,12 +11,16 @@ export const BODY_LIMITS = {
   teamImport: 64 * 1024 * 1024,
 } as const;
 
+/** Server actions (sign-in, team settings, members): small forms; Next's default, stated. */
+export const ACTION_BODY_LIMIT = 1024 * 1024;
+
 /**
- * Next copies a request body for the proxy (proxy.ts) and hands the route only the first
- * `proxyClientMaxBodySize` bytes; one byte past the largest route limit lets every route see
- * that a body is too large (413) instead of parsing a cut-off body ("not valid JSON").
+ * Next copies a request body for the proxy (proxy.ts) and hands the action only the first
+ * `proxyClientMaxBodySize` bytes. The proxy skips /api (whose routes read their own bodies up to
+ * BODY_LIMITS), so its copy only needs to reach one byte past the actions' limit: a larger body
+ * is then refused as too large instead of being parsed cut off.
  */
-export const PROXY_BODY_LIMIT = Math.max(...Object.values(BODY_LIMITS)) + 1;
+export const PROXY_BODY_LIMIT = ACTION_BODY_LIMIT + 1;
 
 /** "20 MB", "64 KB": the size as a person reads it. */
 export function formatBytes(bytes: number): string {

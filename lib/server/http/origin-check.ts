@@ -1,4 +1,10 @@
 // CSRF defence for every non-GET request, decided from headers alone (no database, no session).
+// Pages and server actions get it in proxy.ts; /api routes in their wrappers (route.ts,
+// token-route.ts), because the proxy would first buffer the whole request body.
+
+import { AppError } from "@/lib/shared/errors";
+
+export const CROSS_ORIGIN_MESSAGE = "Cross-origin request refused.";
 
 const SAFE_METHODS = new Set(["GET", "HEAD", "OPTIONS"]);
 
@@ -29,4 +35,17 @@ export function isCrossOriginWrite(req: RequestHeadersView): boolean {
   const source = req.origin ?? req.referer;
   if (source === null) return false;
   return hostOf(source) !== req.host.toLowerCase();
+}
+
+/** The API wrappers' form of the check: throws the 403 the error responder turns into JSON. */
+export function refuseCrossOriginWrite(request: Request): void {
+  const refuse = isCrossOriginWrite({
+    method: request.method,
+    // A request built in code (tests, the server's own calls) may carry no Host header; its URL
+    // names the host then, as Next builds request.url from Host for real requests.
+    host: request.headers.get("host") ?? hostOf(request.url),
+    origin: request.headers.get("origin"),
+    referer: request.headers.get("referer"),
+  });
+  if (refuse) throw new AppError("forbidden:origin", CROSS_ORIGIN_MESSAGE);
 }

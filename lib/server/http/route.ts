@@ -4,6 +4,7 @@ import type { Db } from "@/db/client";
 import { getDb } from "@/db/index";
 import type { Actor } from "@/lib/server/accounts/actor";
 
+import { refuseCrossOriginWrite } from "./origin-check";
 import { actorFromRequest } from "./request-actor";
 import { errorResponse, jsonResponse } from "./respond";
 import { refuseAnonymousWrite } from "./sign-in-first";
@@ -23,7 +24,8 @@ export class Created<T> {
 }
 
 /**
- * Wraps a route handler: resolves the session from the request's cookie, passes the actor on
+ * Wraps a route handler: refuses a write sent from another site's page (CSRF; the proxy skips
+ * /api), resolves the session from the request's cookie, passes the actor on
  * (the services check the team role themselves), turns the result into JSON and any error
  * into `{ error: { code, message, path? } }` with its status. Never a stack trace.
  */
@@ -32,6 +34,7 @@ export function apiRoute<P>(handler: (input: RouteInput<P>) => Promise<unknown>)
     let setCookie: string | undefined;
     let response: Response;
     try {
+      refuseCrossOriginWrite(request);
       const db = getDb();
       const session = await actorFromRequest(request);
       setCookie = session.setCookie;

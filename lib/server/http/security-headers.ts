@@ -52,3 +52,12 @@ export const FIXED_SECURITY_HEADERS: Record<string, string> = {
 export function securityHeaders(options: PolicyOptions): Record<string, string> {
   return { "content-security-policy": contentSecurityPolicy(options), ...FIXED_SECURITY_HEADERS };
 }
+
+/**
+ * The API's answers: JSON and files, never a page, so nothing may load or frame from them. Static
+ * (next.config.ts sets them) because the proxy, which draws nonces, does not run for /api.
+ */
+export const API_SECURITY_HEADERS: Record<string, string> = {
+  "content-security-policy": "default-src 'none'; frame-ancestors 'none'",
+  ...FIXED_SECURITY_HEADERS,
+};

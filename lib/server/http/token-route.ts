@@ -14,6 +14,7 @@ import { AppError } from "@/lib/shared/errors";
 import { hitRateLimit, type RateLimitRule } from "@/lib/server/access/rate-limit";
 import { NOT_FOUND_MESSAGE } from "@/lib/server/access/team-access";
 
+import { refuseCrossOriginWrite } from "./origin-check";
 import { actorFromRequest } from "./request-actor";
 import { errorResponse, jsonResponse } from "./respond";
 import { Created, type RouteInput } from "./route";
@@ -69,6 +70,7 @@ export function tokenRoute<P>(
     let setCookie: string | undefined;
     let response: Response;
     try {
+      refuseCrossOriginWrite(request);
       const db = getDb();
       const params = await context.params;
       const team = (params as { team?: string } | undefined)?.team;

@@ -1,12 +1,8 @@
-import { Readable } from "node:stream";
-
-import { getCloneableBody } from "next/dist/server/body-streams";
-import { PHASE_PRODUCTION_SERVER } from "next/constants";
 import { describe, expect, it } from "vitest";
 
 import * as importRoute from "@/app/api/v1/teams/[team]/import/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
-import nextConfig from "@/next.config";
+import { config as proxyConfig } from "@/proxy";
 
 import { openTestDb } from "../support/db";
 import { closeAppPoolAfterAll, cookieFor, makeWorld } from "../support/workspace";
@@ -35,33 +31,42 @@ function countedBody(megabytes: number) {
   return { stream, counter };
 }
 
-/** The body as the route sees it after Next's proxy has copied it (next.config's limit). */
-async function throughProxyCopy(megabytes: number): Promise<ReadableStream<Uint8Array>> {
-  const limit = nextConfig(PHASE_PRODUCTION_SERVER).experimental?.proxyClientMaxBodySize;
-  const source = Readable.from(
-    (function* () {
-      yield Buffer.from('{"fileName":"big.csv","text":"');
-      for (let i = 0; i < megabytes; i++) yield Buffer.alloc(MB, "1");
-      yield Buffer.from('"}');
-    })(),
-  );
-  const cloneable = getCloneableBody(source as never, limit as number | undefined);
-  const proxyCopy = cloneable.cloneBodyStream();
-  proxyCopy.resume(); // the proxy's own reader
-  await cloneable.finalize();
-  // What the route reads is the source with the proxy's copy swapped in (Next's finalize).
-  const chunks = (source as AsyncIterable<Buffer>)[Symbol.asyncIterator]();
-  return new ReadableStream<Uint8Array>({
-    async pull(controller) {
-      const { value, done } = await chunks.next();
-      if (done) controller.close();
-      else controller.enqueue(new Uint8Array(value));
+/** A JSON upload of `megabytes` MB streamed without a length, as a chunked request arrives. */
+function streamedUpload(megabytes: number): ReadableStream<Uint8Array> {
+  const encoder = new TextEncoder();
+  const ones = encoder.encode("1".repeat(MB));
+  let sent = -1;
+  return new ReadableStream<Uint8Array>(
+    {
+      // Pulled one chunk at a time, so a route that stops reading (its limit) stops the source.
+      pull(controller) {
+        if (sent === -1) controller.enqueue(encoder.encode('{"fileName":"big.csv","text":"'));
+        else if (sent < megabytes) controller.enqueue(ones);
+        else if (sent === megabytes) controller.enqueue(encoder.encode('"}'));
+        else return controller.close();
+        sent++;
+      },
     },
-  });
+    { highWaterMark: 0 },
+  );
+}
+
+/** Whether Next runs proxy.ts for a path: its matcher is a regular expression over the path. */
+function proxyRunsFor(path: string): boolean {
+  return proxyConfig.matcher.some((pattern) => new RegExp(`^${pattern}$`).test(path));
 }
 
 describe("item 8: body limits that really apply, and authorization first", () => {
-  it("body over the route limit answers 413 with the size and the limit, also past Next's proxy copy", async () => {
+  it("the proxy, which copies every body it sees into memory, does not run for the API", () => {
+    expect(proxyRunsFor("/api/v1/teams/demo/import")).toBe(false);
+    expect(proxyRunsFor("/api/v1/teams/demo/test-records")).toBe(false);
+    expect(proxyRunsFor("/api/health")).toBe(false);
+    // pages and their server actions keep the proxy (nonce, origin check)
+    expect(proxyRunsFor("/teams/demo/settings")).toBe(true);
+    expect(proxyRunsFor("/sign-in")).toBe(true);
+  });
+
+  it("body over the route limit answers 413 with the size and the limit, also when streamed", async () => {
     const w = await makeWorld(db);
     const cookie = (await cookieFor(db, w.members.editor))!;
     const url = `http://app.test/api/v1/teams/${w.slug}/test-records`;
@@ -78,13 +83,12 @@ describe("item 8: body limits that really apply, and authorization first", () =>
     expect((await claimed.json()).error.message).toBe(
       "The upload is 30 MB; this route takes at most 20 MB.",
     );
-    // 25 MB without a length, as it reaches the route after the proxy: with Next's default
-    // 10 MB copy the route saw a cut-off body and answered 400 "not valid JSON".
+    // 25 MB without a length: the route counts what it reads and stops at its limit.
     const streamed = await recordsRoute.POST(
       new Request(url, {
         method: "POST",
         headers: { cookie, "content-type": "application/json" },
-        body: await throughProxyCopy(25),
+        body: streamedUpload(25),
         duplex: "half",
       } as RequestInit),
       params,

@@ -1,6 +1,10 @@
 import { describe, expect, it } from "vitest";
 
-import { isCrossOriginWrite } from "@/lib/server/http/origin-check";
+import {
+  CROSS_ORIGIN_MESSAGE,
+  isCrossOriginWrite,
+  refuseCrossOriginWrite,
+} from "@/lib/server/http/origin-check";
 
 const base = { host: "127.0.0.1:3000", origin: null, referer: null };
 
@@ -52,5 +56,25 @@ describe("origin check for state-changing requests", () => {
 
   it("lets a header-less non-browser client through", () => {
     expect(isCrossOriginWrite({ ...base, method: "POST" })).toBe(false);
+  });
+});
+
+describe("refuseCrossOriginWrite (the API wrappers' form)", () => {
+  const url = "http://127.0.0.1:3000/api/v1/teams/demo/scenarios";
+  it("throws a 403 error with the message for a write sent from another site", () => {
+    const request = new Request(url, {
+      method: "POST",
+      headers: { host: "127.0.0.1:3000", origin: "https://elsewhere.example" },
+    });
+    expect(() => refuseCrossOriginWrite(request)).toThrow(
+      expect.objectContaining({ code: "forbidden:origin", message: CROSS_ORIGIN_MESSAGE }),
+    );
+  });
+  it("lets the same origin, a script without Origin and any read through", () => {
+    const same = new Request(url, { method: "POST", headers: { origin: "http://127.0.0.1:3000" } });
+    expect(() => refuseCrossOriginWrite(same)).not.toThrow();
+    expect(() => refuseCrossOriginWrite(new Request(url, { method: "DELETE" }))).not.toThrow();
+    const read = new Request(url, { headers: { origin: "https://elsewhere.example" } });
+    expect(() => refuseCrossOriginWrite(read)).not.toThrow();
   });
 });
