@@ -13,7 +13,7 @@ import cluster from "node:cluster";
 import http from "node:http";
 import os from "node:os";
 
-import { PEER_HEADER, normalizeAddress } from "@/lib/server/http/client-peer";
+import { stampPeer } from "@/lib/server/http/client-peer";
 
 const port = Number(process.env.PORT ?? 3000);
 const host = process.env.HOST ?? "127.0.0.1";
@@ -78,8 +78,7 @@ async function runAppProcess() {
   await app.prepare();
 
   const server = http.createServer((req, res) => {
-    delete req.headers[PEER_HEADER];
-    req.headers[PEER_HEADER] = normalizeAddress(req.socket.remoteAddress ?? "");
+    stampPeer(req, req.socket.remoteAddress);
     void handle(req, res);
   });
   server.keepAliveTimeout = KEEP_ALIVE_MS;

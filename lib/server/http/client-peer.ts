@@ -23,6 +23,24 @@ export function normalizeAddress(address: string): string {
   return plain.slice(0, MAX_ADDRESS_LENGTH);
 }
 
+/**
+ * What scripts/serve.ts does to each request before Next sees it: every copy of the peer header
+ * the client sent goes (from the parsed headers and the raw list), and the socket's address is
+ * written. Only then can the header be believed.
+ */
+export function stampPeer(
+  request: { headers: Record<string, string | string[] | undefined>; rawHeaders: string[] },
+  socketAddress: string | undefined,
+): void {
+  const raw = request.rawHeaders;
+  for (let i = raw.length - 2; i >= 0; i -= 2) {
+    if (raw[i].toLowerCase() === PEER_HEADER) raw.splice(i, 2);
+  }
+  const peer = normalizeAddress(socketAddress ?? "");
+  request.headers[PEER_HEADER] = peer;
+  raw.push(PEER_HEADER, peer);
+}
+
 export function parseTrustedProxies(setting: string | undefined): Set<string> {
   return new Set(
     (setting ?? "")

@@ -49,7 +49,11 @@ export function bossDbOn(db: Executor): PgBoss.Db {
     async executeSql(text: string, values: unknown[]) {
       const pieces = text.split(/\$(\d+)/);
       const query = sql.join(
-        pieces.map((piece, i) => (i % 2 ? sql`${values[Number(piece) - 1]}` : sql.raw(piece))),
+        // An undefined value would vanish from drizzle's SQL (pg-boss passes unset defaults so):
+        // it is bound as NULL, as pg does.
+        pieces.map((piece, i) =>
+          i % 2 ? sql`${values[Number(piece) - 1] ?? null}` : sql.raw(piece),
+        ),
         sql.raw(""),
       );
       return { rows: [...(await db.execute(query))] };
