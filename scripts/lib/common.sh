@@ -14,10 +14,12 @@ as_admin() {
     die "need root (or sudo) to run: $*"; fi
 }
 
+# Lock::Timeout: another apt run on the machine (a second checkout's tests, unattended upgrades)
+# holds the dpkg lock for a while; waiting for it beats failing the whole set-up.
 apt_install() {
   log "installing Debian packages: $*"
-  as_admin env DEBIAN_FRONTEND=noninteractive apt-get update -qq >/dev/null
-  as_admin env DEBIAN_FRONTEND=noninteractive apt-get install -y -qq "$@" >/dev/null
+  as_admin env DEBIAN_FRONTEND=noninteractive apt-get -o DPkg::Lock::Timeout=600 update -qq >/dev/null
+  as_admin env DEBIAN_FRONTEND=noninteractive apt-get -o DPkg::Lock::Timeout=600 install -y -qq "$@" >/dev/null
 }
 
 # npm ci when node_modules is missing or older than the lock file. --include=dev because the
@@ -46,6 +48,7 @@ ensure_postgres_installed() {
 
 ensure_chromium_installed() {
   command -v chromium >/dev/null 2>&1 || apt_install chromium
+  command -v chromium >/dev/null 2>&1 || die "chromium is not installed and apt could not install it"
 }
 
 # Run a PostgreSQL server binary: as the postgres user when we are root (initdb refuses root).

@@ -159,7 +159,7 @@ describe("hand-off to the simulation team", () => {
       /Sign-off Verdict Approved Reviewer Rita Reviewer \(invented\) Date \d{4}-\d{2}-\d{2}/,
     );
     expect(text).toContain("Parameters");
-    expect(text).toMatch(/E1 MPa 11000/);
+    expect(text).toMatch(/E1 Young's modulus, axis 1 MPa 11000/);
     expect(text).toMatch(/dcrit/);
     expect(text).toMatch(/Verdict: Approved by/);
     expect(text).toContain("no design allowable");
