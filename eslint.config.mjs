@@ -150,6 +150,8 @@ const config = [
       "next-env.d.ts",
       "test-results/**",
       "artifacts/**",
+      // The compute pool's built worker files (esbuild output, like the build folders).
+      ".compute/**",
     ],
   },
   {

@@ -1,6 +1,6 @@
-// Next calls register() once when a server instance starts. Each instance runs a worker of the
-// parameter-study queue in-process, so several instances share the studies' jobs.
-// STUDY_WORKER=off leaves an instance out (it still submits jobs).
+// Next calls register() once when a server instance starts. Parameter-study jobs are worked by
+// their own process (`npm run worker`, scripts/worker.ts), not by the app: a long study never
+// competes with requests. STUDY_WORKER=in-app makes an instance work jobs too (a lone dev server).
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   if (!process.env.DATABASE_URL || process.env.NEXT_PHASE === "phase-production-build") return;
@@ -11,7 +11,7 @@ export async function register() {
   } catch (error) {
     console.error("[mail outbox] not started:", error instanceof Error ? error.message : error);
   }
-  if (process.env.STUDY_WORKER === "off") return;
+  if (process.env.STUDY_WORKER !== "in-app") return;
   try {
     const { startAppStudyWorker } = await import("./lib/server/handoff/studies/app-queue");
     await startAppStudyWorker();

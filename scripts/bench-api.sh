@@ -35,5 +35,5 @@ npm run --silent db:migrate
 
 build_if_stale "$RUN_DIR/build.log"
 
-# The load script seeds, starts `next start` as its own child and stops it before it returns.
+# The load script seeds, starts scripts/serve.ts (every core) as its own child and stops it before it returns.
 npx tsx scripts/bench-api.ts

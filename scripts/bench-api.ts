@@ -1,11 +1,11 @@
 /**
  * Load test of the workspace API (run through scripts/bench-api.sh, which provides the
- * database and the build). Seeds 10,000 scenarios / 100,000 revisions, starts the app, then
- * measures with autocannon at 50 connections: a floor (GET /api/health, one trivial query through
- * the same stack), the scenarios list route and saving a revision. The ratios to the floor say
- * what the routes themselves cost, whatever else the machine is doing.
+ * database and the build). Seeds 10,000 scenarios / 100,000 revisions, starts the production
+ * server (scripts/serve.ts), then measures with autocannon at 50 connections: a floor
+ * (`GET /api/health`, one trivial query through the same stack), the scenarios list route and
+ * saving a revision. The ratios compare each route's p95 with the floor's of the same run.
  */
-import { spawn, type ChildProcess } from "node:child_process";
+import type { ChildProcess } from "node:child_process";
 import { readFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -15,22 +15,13 @@ import { createLucia, SESSION_COOKIE } from "@/lib/server/accounts/auth/lucia";
 import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 
 import { measure } from "./bench-api-measure";
+import { startApp, stopApp } from "./load/app-process";
 import { benchScenarioIds, REVISIONS_PER_SCENARIO, seedBench } from "./bench-api-seed";
 
 const PORT = Number(process.env.BENCH_APP_PORT ?? 30000);
 const BASE = `http://127.0.0.1:${PORT}`;
 const CONNECTIONS = 50;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
-
-function startApp(): ChildProcess {
-  const nextBin = path.join(process.cwd(), "node_modules/next/dist/bin/next");
-  // Own process group, so the whole server goes when we stop it.
-  return spawn(process.execPath, [nextBin, "start", "-H", "127.0.0.1", "-p", String(PORT)], {
-    stdio: ["ignore", "ignore", "inherit"],
-    detached: true,
-    env: process.env,
-  });
-}
 
 async function waitForApp(url: string, cookie: string) {
   for (let i = 0; i < 300; i++) {
@@ -45,14 +36,7 @@ async function waitForApp(url: string, cookie: string) {
 async function main() {
   const { db, close } = createDb(requireDatabaseUrl(), { max: 2 });
   let app: ChildProcess | undefined;
-  const stopApp = () => {
-    if (app?.pid && app.exitCode === null) {
-      try {
-        process.kill(-app.pid, "SIGTERM");
-      } catch {}
-    }
-  };
-  process.on("exit", stopApp);
+  process.on("exit", () => stopApp(app));
   try {
     let t = Date.now();
     const seed = await seedBench(db);
@@ -73,9 +57,9 @@ async function main() {
     const listUrl = `${BASE}/api/v1/teams/${seed.teamSlug}/scenarios`;
 
     t = Date.now();
-    app = startApp();
+    app = startApp(PORT, process.env.BENCH_APP_LOG ?? "/dev/null");
     await waitForApp(listUrl, cookie);
-    console.log(`next start ready in ${((Date.now() - t) / 1000).toFixed(1)} s on ${BASE}`);
+    console.log(`server ready in ${((Date.now() - t) / 1000).toFixed(1)} s on ${BASE}`);
     await measure(
       "warm-up",
       {
@@ -89,7 +73,12 @@ async function main() {
 
     const floor = await measure(
       "floor",
-      { url: `${BASE}/api/health`, connections: CONNECTIONS, duration: SECONDS },
+      {
+        url: `${BASE}/api/health`,
+        connections: CONNECTIONS,
+        duration: SECONDS,
+        requests: [{ setupRequest: (req) => ({ ...req, headers: { cookie: nextCookie() } }) }],
+      },
       app.pid,
     );
 
@@ -170,7 +159,7 @@ async function main() {
       `bench:api: list_p95=${list.p95} save_p95=${save.p95} floor_p95=${floor.p95} list_ratio=${ratio(list)} save_ratio=${ratio(save)} list_cpu=${list.serverCpuMs} save_cpu=${save.serverCpuMs} errors=${floor.errors + list.errors + save.errors}`,
     );
   } finally {
-    stopApp();
+    stopApp(app);
     await close();
   }
 }

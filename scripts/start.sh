@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # The one start command: installs what is missing, starts PostgreSQL and the fake mail server on
-# loopback, migrates, seeds the invented demo team, builds and serves Craquelure on $PORT.
+# loopback, migrates, seeds the invented demo team, builds and serves Craquelure on $PORT with one
+# app process per core (scripts/serve.ts) and a study worker (scripts/worker.ts).
 # Ctrl-C (or SIGTERM) stops everything it started; data stays in .data/ for the next start.
 set -euo pipefail
 cd "$(dirname "$0")/.."
@@ -59,8 +60,10 @@ wait_for_port "$SMTP_PORT" 20 || die "fake mail server did not start"
 
 build_if_stale "$DATA_DIR/build.log"
 
-# Idle keep-alive sockets outlive any client's (65 s), so a client never reuses one the server is closing.
-node_modules/.bin/next start -H 127.0.0.1 -p "$PORT" --keepAliveTimeout 65000 &
+# One app process per core behind Node's cluster balancer (scripts/serve.ts), and one study worker.
+PORT=$PORT HOST=127.0.0.1 node --import tsx scripts/serve.ts &
+children+=($!)
+node --conditions=react-server --import tsx scripts/worker.ts &
 children+=($!)
 wait_for_http "http://127.0.0.1:$PORT/" 60 || die "the app did not answer on port $PORT"
 if [ "${CRAQUELURE_DEMO_MAIL:-}" = 1 ]; then

@@ -100,7 +100,10 @@ if want e2e; then
   if NODE_ENV=production npx next build >"$RUN_DIR/build.log" 2>&1; then
     passed=$((passed + 1))
     npm run --silent db:seed >/dev/null
-    NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$APP_PORT" --keepAliveTimeout 65000 >"$RUN_DIR/app.log" 2>&1 &
+    # The server scripts/start.sh runs: cluster balancer, one app process per core, a study worker.
+    PORT=$APP_PORT HOST=127.0.0.1 node --import tsx scripts/serve.ts >"$RUN_DIR/app.log" 2>&1 &
+    children+=($!)
+    NODE_ENV=production node --conditions=react-server --import tsx scripts/worker.ts >>"$RUN_DIR/app.log" 2>&1 &
     children+=($!)
     if wait_for_http "http://127.0.0.1:$APP_PORT/" 60; then
       failed_before=$failed

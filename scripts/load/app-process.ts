@@ -1,15 +1,16 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { openSync } from "node:fs";
-import path from "node:path";
 
-/** `next start` in its own process group (so stopping it takes its children too). */
+/**
+ * The production server as scripts/start.sh runs it (scripts/serve.ts: the cluster balancer and
+ * one app process per core), in its own process group so stopping it takes every app process.
+ */
 export function startApp(port: number, logFile: string): ChildProcess {
-  const nextBin = path.join(process.cwd(), "node_modules/next/dist/bin/next");
   const log = openSync(logFile, "a");
-  return spawn(process.execPath, [nextBin, "start", "-H", "127.0.0.1", "-p", String(port)], {
+  return spawn(process.execPath, ["--import", "tsx", "scripts/serve.ts"], {
     stdio: ["ignore", log, log],
     detached: true,
-    env: process.env,
+    env: { ...process.env, PORT: String(port), HOST: "127.0.0.1" },
   });
 }
 

@@ -6,6 +6,8 @@ import { actorFromUser, createLucia, type AppLucia } from "@/lib/server/accounts
 import { validateSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { isHttpsApp } from "@/lib/server/access/env";
 
+import { clientAddressFrom, trustedProxies } from "./client-peer";
+
 let lucia: AppLucia | undefined;
 
 function apiLucia(): AppLucia {
@@ -32,8 +34,7 @@ export async function actorFromRequest(
   };
 }
 
-/** Per-address key for rate limits; see lib/server/accounts/auth/client-address.ts for the header's limits. */
+/** Per-address key for rate limits (the rule: lib/server/http/client-peer.ts). */
 export function clientAddressOf(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return (forwarded || request.headers.get("x-real-ip")?.trim() || "direct").slice(0, 64);
+  return clientAddressFrom((name) => request.headers.get(name), trustedProxies());
 }

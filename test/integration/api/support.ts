@@ -3,6 +3,8 @@ import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { createApiToken } from "@/lib/server/accounts/api-tokens/manage";
 import type { Role } from "@/lib/shared/permissions";
 
+import { fromPeer } from "../support/peer";
+
 /** A personal token of `actor` for `team` with `role`; returns the secret. */
 export async function tokenFor(
   db: Db,
@@ -29,7 +31,7 @@ export async function callText(
 ) {
   const request = new Request(opts.url ?? "http://app.test/api/v1/runs", {
     method: opts.method ?? "POST",
-    headers: { "content-type": "application/json", ...opts.headers },
+    headers: { "content-type": "application/json", ...fromPeer(), ...opts.headers },
     body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
   });
   const response = await (

@@ -3,6 +3,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 
 import { openTestDb } from "../support/db";
+import { fromPeer } from "../support/peer";
 import { closeAppPoolAfterAll, cookieFor, makeWorld } from "../support/workspace";
 
 import { bodyArb, paramsArb, queryArb } from "./arbitraries";
@@ -57,7 +58,7 @@ describe("fuzzing every route's path, query and body", () => {
               headers: {
                 cookie,
                 "content-type": "application/json",
-                "x-forwarded-for": "198.51.100.7",
+                ...fromPeer("198.51.100.7"),
               },
               body: withBody ? body : undefined,
             });

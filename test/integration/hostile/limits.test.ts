@@ -7,6 +7,7 @@ import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
 import { SHARE_MISS_RULE } from "@/lib/server/workspace/share-view";
 
 import { openTestDb, unique } from "../support/db";
+import { fromPeer } from "../support/peer";
 import { callRoute, closeAppPoolAfterAll, cookieFor, makeWorld } from "../support/workspace";
 import { uploadBody } from "../records/support";
 
@@ -120,7 +121,7 @@ describe("guessing share tokens", () => {
       const token = randomBytes(16).toString("base64url");
       const r = await callRoute(shareRoute.GET, {
         params: { token },
-        headers: { "x-forwarded-for": address },
+        headers: fromPeer(address),
       });
       statuses.push(r.status);
       if (r.status === 429) expect(r.body.error.code).toBe("rate-limited:share");
@@ -131,7 +132,7 @@ describe("guessing share tokens", () => {
     // The limit is the guesser's, not the link's: the real token still opens from elsewhere.
     const real = await callRoute(shareRoute.GET, {
       params: { token: w.token },
-      headers: { "x-forwarded-for": unique("192.0.2") },
+      headers: fromPeer(unique("192.0.2")),
     });
     expect(real.status).toBe(200);
   });

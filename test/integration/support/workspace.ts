@@ -13,6 +13,7 @@ import { createScenario } from "@/lib/server/workspace/scenarios";
 import { createShareLink } from "@/lib/server/workspace/share-links";
 
 import { unique } from "./db";
+import { fromPeer } from "./peer";
 import { makeTeamWithAllRoles, type TeamFixture } from "./team";
 
 export const DEMO_FILE = JSON.parse(
@@ -86,7 +87,10 @@ export interface CallResult {
   headers: Headers;
 }
 
-/** Calls an exported route handler the way Next does: a Request and a params promise. */
+/**
+ * Calls an exported route handler the way Next does behind scripts/serve.ts: a Request with the
+ * peer header and a params promise.
+ */
 export async function callRoute(
   handler: unknown,
   opts: {
@@ -99,7 +103,8 @@ export async function callRoute(
     headers?: Record<string, string>;
   },
 ): Promise<CallResult> {
-  const headers: Record<string, string> = { ...opts.headers };
+  // A client of its own unless the test names one (opts.headers can set the peer header).
+  const headers: Record<string, string> = { ...fromPeer(), ...opts.headers };
   if (opts.cookie) headers.cookie = opts.cookie;
   let body: string | undefined = opts.rawBody;
   if (opts.body !== undefined) {

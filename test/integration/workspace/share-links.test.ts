@@ -13,6 +13,7 @@ import {
 import { SHARE_GONE_MESSAGE, SHARE_MISS_RULE } from "@/lib/server/workspace/share-view";
 
 import { openTestDb, unique } from "../support/db";
+import { fromPeer } from "../support/peer";
 import { callRoute, closeAppPoolAfterAll, DEMO_FILE, makeWorld } from "../support/workspace";
 
 const db = openTestDb();
@@ -21,7 +22,7 @@ closeAppPoolAfterAll();
 const DAY = 24 * 60 * 60 * 1000;
 
 function open(token: string, address = unique("10.0.0")) {
-  return callRoute(shareRoute.GET, { params: { token }, headers: { "x-forwarded-for": address } });
+  return callRoute(shareRoute.GET, { params: { token }, headers: fromPeer(address) });
 }
 
 function expectGone(r: { status: number; body: unknown }) {

@@ -2,9 +2,12 @@ import "server-only";
 
 /**
  * The parameter-study queue on pg-boss (its own schema "pgboss" in the app's database, created
- * at start). Each set of a study is one job, so every app instance with a worker takes a share.
+ * at start). Each set of a study is one job, so every worker process (`npm run worker`) takes a share.
  */
+import { sql } from "drizzle-orm";
 import PgBoss from "pg-boss";
+
+import type { Executor } from "@/db/client";
 
 export const STUDY_QUEUE = "parameter-study-set";
 
@@ -36,8 +39,36 @@ export async function openStudyQueue(connectionString: string, options: QueueOpt
   return boss;
 }
 
-export async function enqueueStudyItems(boss: PgBoss, itemIds: string[]): Promise<void> {
+/**
+ * pg-boss's own statements run on one of our handles (a transaction among them): its `$n`
+ * placeholders become bound parameters of a drizzle query, so the jobs commit or roll back with
+ * the rows they point at.
+ */
+export function bossDbOn(db: Executor): PgBoss.Db {
+  return {
+    async executeSql(text: string, values: unknown[]) {
+      const pieces = text.split(/\$(\d+)/);
+      const query = sql.join(
+        // An undefined value would vanish from drizzle's SQL (pg-boss passes unset defaults so):
+        // it is bound as NULL, as pg does.
+        pieces.map((piece, i) =>
+          i % 2 ? sql`${values[Number(piece) - 1] ?? null}` : sql.raw(piece),
+        ),
+        sql.raw(""),
+      );
+      return { rows: [...(await db.execute(query))] };
+    },
+  };
+}
+
+/** Jobs for the given study items; pass the transaction that inserted them as `db`. */
+export async function enqueueStudyItems(
+  boss: PgBoss,
+  itemIds: string[],
+  db?: Executor,
+): Promise<void> {
   await boss.insert(
     itemIds.map((itemId) => ({ name: STUDY_QUEUE, data: { itemId } satisfies StudyJob })),
+    db ? { db: bossDbOn(db) } : {},
   );
 }

@@ -35,19 +35,25 @@ export async function submitStudy(
   const ctx = await authorizeTeam(db, actor, teamSlug, "fit:run");
   const request = parseWithPath(studyRequestSchema, input);
   const { legs, sets, design } = designStudy(request);
-  const { study, itemIds } = await insertStudy(
-    db,
-    {
-      teamId: ctx.team.id,
-      name: request.name || "Parameter study",
-      legs,
-      design,
-      total: sets.length,
-      createdBy: ctx.actor.id,
-    },
-    sets.map((set, position) => ({ position, set })),
-  );
-  await enqueueStudyItems(await boss(), itemIds);
+  const queue = await boss();
+  // The study, its items and their jobs commit together: no study without jobs, no job
+  // pointing at a study that was rolled back.
+  const { study } = await db.transaction(async (tx) => {
+    const inserted = await insertStudy(
+      tx,
+      {
+        teamId: ctx.team.id,
+        name: request.name || "Parameter study",
+        legs,
+        design,
+        total: sets.length,
+        createdBy: ctx.actor.id,
+      },
+      sets.map((set, position) => ({ position, set })),
+    );
+    await enqueueStudyItems(queue, inserted.itemIds, tx);
+    return inserted;
+  });
   await recordAudit(db, {
     actorId: ctx.actor.id,
     teamId: ctx.team.id,
