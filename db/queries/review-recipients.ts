@@ -1,4 +1,4 @@
-import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
+import { and, eq, inArray, ne, or, sql, type SQL } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
@@ -14,11 +14,18 @@ export interface Recipient {
 /**
  * Who hears about a review: the scenario's editors (its creator and the authors of its
  * revisions, while they still edit in this team), plus, when asked, the team's reviewers and
- * owners (who give verdicts) and any extra people (the one who requested the review).
+ * owners (who give verdicts) and any extra people (the one who requested the review). The
+ * person who acted is never among them: nobody is mailed about their own request or verdict.
  */
 export async function reviewRecipients(
   db: Executor,
-  opts: { teamId: string; scenarioId: string; includeReviewers: boolean; extra?: string[] },
+  opts: {
+    teamId: string;
+    scenarioId: string;
+    includeReviewers: boolean;
+    extra?: string[];
+    actorId: string;
+  },
 ): Promise<Recipient[]> {
   const contributors = sql`(
     select ${scenarioRevisions.authorId} from ${scenarioRevisions}
@@ -37,6 +44,8 @@ export async function reviewRecipients(
     .selectDistinct({ id: users.id, email: users.email, name: users.name })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(memberships.teamId, opts.teamId), or(...who)))
+    .where(
+      and(eq(memberships.teamId, opts.teamId), ne(memberships.userId, opts.actorId), or(...who)),
+    )
     .orderBy(users.email);
 }

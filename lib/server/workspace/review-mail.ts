@@ -10,6 +10,7 @@ export interface ReviewMailContext {
   team: { id: string; slug: string; name: string };
   scenario: { id: string; name: string };
   revision: number;
+  actorId: string;
   actorName: string;
   note: string;
   to: ReviewState;
@@ -28,6 +29,7 @@ export async function sendReviewMail(db: Db, deps: MailDeps, ctx: ReviewMailCont
     scenarioId: ctx.scenario.id,
     includeReviewers: requested,
     extra: ctx.requesterId ? [ctx.requesterId] : [],
+    actorId: ctx.actorId,
   });
   const url = linkTo(
     deps.appUrl,

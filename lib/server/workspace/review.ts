@@ -145,6 +145,7 @@ export async function changeReview(
     team: ctx.team,
     scenario,
     revision: revision.number,
+    actorId: ctx.actor.id,
     actorName: ctx.actor.name,
     note: data.note,
     to: step.to,
