@@ -5,6 +5,7 @@ import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
 import type { RefineProgress, RefineResult } from "@/lib/calibration/refine";
+import { checkRefineBounds } from "@/lib/calibration/refine-bounds-check";
 import { defaultBounds, FITTABLE, type FittableParam } from "@/lib/calibration/refine-params";
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { FitCancelled, FitClient } from "@/workers/fit-client";
@@ -52,6 +53,12 @@ export function RefinePanel({
   useEffect(() => () => client.current?.dispose(), []);
 
   async function run() {
+    // Bad boxes are said here, before any record loads or the worker starts.
+    const problems = checkRefineBounds(start, free, bounds);
+    if (problems.length > 0) {
+      setError(problems.join(" "));
+      return;
+    }
     setError(null);
     setRunning(true);
     setProgress(null);

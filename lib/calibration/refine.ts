@@ -10,6 +10,7 @@ import type { MaterialParams } from "@/lib/mechanics/types";
 import { cleanRecord } from "./clean";
 import { decimationIndices } from "./decimate";
 import { inseparableParams, type Inseparable } from "./identifiability";
+import { assertRefineBounds } from "./refine-bounds-check";
 import { paramVector, type Bounds, type FittableParam } from "./refine-params";
 import { canReplay, replayRecord } from "./replay";
 import type { RecordPoints, TestRecordInput } from "./types";
@@ -78,6 +79,7 @@ export function refine(
   start: MaterialParams,
   options: RefineOptions,
 ): RefineResult {
+  assertRefineBounds(start, options.free, options.bounds); // before any replay
   const usable = records.filter((r) => canReplay(r.testType));
   const skipped = records.filter((r) => !canReplay(r.testType)).map((r) => r.id);
   const { sets, y } = prepare(usable, options.maxPointsPerRecord ?? 500);
