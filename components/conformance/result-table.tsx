@@ -1,3 +1,4 @@
+import { quantitySymbol } from "@/lib/shared/quantity-symbols";
 import type { ConformanceResult } from "@/lib/server/handoff/conformance/types";
 
 const num = (x: number) => (x >= Number.MAX_VALUE ? "—" : Number(x.toPrecision(4)).toString());
@@ -20,7 +21,7 @@ export function ConformanceResultTable({ result }: { result: ConformanceResult }
       <tbody>
         {result.quantities.map((q) => (
           <tr key={q.quantity} className="border-t border-glaze-line">
-            <td className="py-1 font-mono">{q.quantity}</td>
+            <td className="py-1">{quantitySymbol(q.quantity)}</td>
             <td>{num(q.tolerance)}</td>
             <td>{num(q.maxAbs)}</td>
             <td>{num(q.rms)}</td>

@@ -1,4 +1,5 @@
 import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
+import { quantitySymbol } from "@/lib/shared/quantity-symbols";
 
 /** The conformance checks recorded on the revision, newest first, with their worst deviations. */
 export function ConformanceSummary({ checks }: { checks: CalibrationReport["checks"] }) {
@@ -34,7 +35,11 @@ export function ConformanceSummary({ checks }: { checks: CalibrationReport["chec
                 {c.result.tolerance.stressFraction * 100} % of peak stress,{" "}
                 {c.result.tolerance.damage} on damage
               </td>
-              <td>{worst ? `${worst.quantity}: ${Number(worst.maxAbs.toPrecision(3))}` : "—"}</td>
+              <td>
+                {worst
+                  ? `${quantitySymbol(worst.quantity)}: ${Number(worst.maxAbs.toPrecision(3))}`
+                  : "—"}
+              </td>
               <td>{c.passed ? "pass" : `fail from increment ${c.firstFailIncrement}`}</td>
             </tr>
           );

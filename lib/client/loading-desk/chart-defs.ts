@@ -24,19 +24,15 @@ export interface ChartDef {
   marks: boolean;
 }
 
-export type StrainComponent = "eps11" | "eps22" | "gam12";
-export type StressComponent = "sig11" | "sig22" | "sig12";
+import {
+  STRAIN_LABEL,
+  STRESS_LABEL,
+  type StrainComponent,
+  type StressComponent,
+} from "@/lib/shared/quantity-symbols";
 
-export const STRAIN_LABEL: Record<StrainComponent, string> = {
-  eps11: "ε11",
-  eps22: "ε22",
-  gam12: "γ12",
-};
-export const STRESS_LABEL: Record<StressComponent, string> = {
-  sig11: "σ11",
-  sig22: "σ22",
-  sig12: "σ12",
-};
+export type { StrainComponent, StressComponent };
+export { STRAIN_LABEL, STRESS_LABEL };
 
 export function stressStrainDef(x: StrainComponent, y: StressComponent): ChartDef {
   return {
