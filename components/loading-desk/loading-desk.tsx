@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { useCallback, useMemo, useReducer, useState } from "react";
+import { useCallback, useEffect, useMemo, useReducer, useState } from "react";
 import { Panel } from "@/components/ui/panel";
 import { expandPathDoc } from "@/lib/scenario/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
@@ -26,6 +26,7 @@ import { ResultsTable } from "./results-table";
 import { RunErrors } from "./run-errors";
 import { SetDiffTable } from "./set-diff-table";
 import { SetListPanel } from "./set-list-panel";
+import { UnsavedMark } from "./unsaved-mark";
 import { useSolverRuns } from "./use-solver-runs";
 import { useUrlSync } from "./use-url-sync";
 
@@ -48,6 +49,10 @@ export interface LoadingDeskProps {
   library?: readonly LibraryChoice[];
   /** "revision 4" when a saved revision is open; stamped on exports. Null on scratch data. */
   revision?: string | null;
+  /** The desk differs from the saved revision: shows the unsaved mark beside the save button. */
+  unsaved?: boolean;
+  /** Called with the scenario file after every change (and once on opening). */
+  onFileChange?: (file: ScenarioFileJson) => void;
 }
 
 export function LoadingDesk({
@@ -59,6 +64,8 @@ export function LoadingDesk({
   overlays,
   library,
   revision = null,
+  unsaved,
+  onFileChange,
 }: LoadingDeskProps) {
   const [m, dispatch] = useReducer(loadingDeskReducer, initialScenario, (s) =>
     initModel(fromScenario(s)),
@@ -68,6 +75,7 @@ export function LoadingDesk({
   const store = useSolverRuns(m.entries, legs);
   const file = useMemo(() => toScenarioFile(m, m.doc), [m]);
   useUrlSync(file, !!syncUrl);
+  useEffect(() => onFileChange?.(file), [file, onFileChange]);
   const active = m.entries.find((e) => e.set.id === m.activeId) ?? m.entries[0];
   const onValid = useCallback(
     (set: Omit<ParameterSet, "id">) =>
@@ -114,6 +122,7 @@ export function LoadingDesk({
         >
           Copy link
         </button>
+        {unsaved && !readOnly ? <UnsavedMark /> : null}
         {readOnly ? null : onSave ? (
           <button
             type="button"

@@ -13,8 +13,11 @@ import { useSaveRevision } from "@/lib/client/data/use-save-revision";
 import { useRecordOverlays } from "@/lib/client/data/use-test-records";
 
 import { ConflictPanel } from "./conflict-panel";
+import { DraftOffer } from "./draft-offer";
 import { RecordOverlayPicker } from "./record-overlay-picker";
 import { SaveRevisionForm } from "./save-revision-form";
+import { useKeptDraft } from "./use-kept-draft";
+import { useLeaveGuard } from "./use-leave-guard";
 
 export interface ScenarioEditorProps {
   slug: string;
@@ -23,10 +26,19 @@ export interface ScenarioEditorProps {
   number: number;
   file: OpenedScenario;
   editable: boolean;
+  /** The team named in the read-only banner. */
+  teamName?: string;
 }
 
 /** The loading desk on a saved revision, with save-as-new-revision and the 409 path. */
-export function ScenarioEditor({ slug, scenarioId, number, file, editable }: ScenarioEditorProps) {
+export function ScenarioEditor({
+  slug,
+  scenarioId,
+  number,
+  file,
+  editable,
+  teamName,
+}: ScenarioEditorProps) {
   const router = useRouter();
   const save = useSaveRevision(slug, scenarioId);
   const [pending, setPending] = useState<ScenarioFileJson | null>(null);
@@ -37,6 +49,18 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
   const [recordIds, setRecordIds] = useState<string[]>([]);
   const records = useRecordOverlays(slug, recordIds);
   const library = useLibraryChoices(slug);
+  // A restored draft reopens the desk on the kept file; the saved revision stays the baseline.
+  const [opened, setOpened] = useState<{ scenario: OpenedScenario; key: number }>({
+    scenario: file,
+    key: 0,
+  });
+  const draft = useKeptDraft({ team: slug, scenarioId, baseRevision: number }, file, editable);
+  useLeaveGuard(editable && draft.unsaved);
+
+  const restoreDraft = () => {
+    const scenario = draft.restore();
+    if (scenario) setOpened((o) => ({ scenario, key: o.key + 1 }));
+  };
 
   const submit = (base: number, text: string) => {
     if (!pending) return;
@@ -46,6 +70,7 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
       { baseRevision: base, message: text, file: pending },
       {
         onSuccess: () => {
+          draft.clear();
           setPending(null);
           setConflict(null);
           router.push(teamPages(slug).scenario(scenarioId));
@@ -68,6 +93,15 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
 
   return (
     <div className="space-y-3">
+      {draft.offer ? (
+        <div className="mx-auto max-w-[1600px] px-4">
+          <DraftOffer
+            savedAt={draft.offer.savedAt}
+            onRestore={restoreDraft}
+            onDiscard={draft.discard}
+          />
+        </div>
+      ) : null}
       {pending && conflict ? (
         <div className="mx-auto max-w-[1600px] px-4">
           <ConflictPanel
@@ -106,9 +140,13 @@ export function ScenarioEditor({ slug, scenarioId, number, file, editable }: Sce
         />
       </div>
       <LoadingDesk
+        key={opened.key}
         library={library}
-        initialScenario={file}
+        initialScenario={opened.scenario}
         readOnly={!editable}
+        teamName={teamName}
+        unsaved={draft.unsaved}
+        onFileChange={draft.report}
         onSave={editable ? (f) => setPending(f) : undefined}
         overlays={records.overlays}
         revision={`revision ${number}`}

@@ -47,7 +47,7 @@ export default async function SharedRevisionPage({
             <Cautions />
           </div>
         </div>
-        <SharedLoadingDeskLoader scenario={scenario} />
+        <SharedLoadingDeskLoader scenario={scenario} teamName={shared.teamName} />
       </main>
       <footer className="mt-8 border-t border-glaze-line bg-glaze-deep/50">
         <div className="mx-auto max-w-[1600px] px-4 py-4">

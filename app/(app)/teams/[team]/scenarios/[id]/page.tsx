@@ -100,6 +100,7 @@ export default async function ScenarioPage({
           number={number}
           file={file}
           editable={editable}
+          teamName={ctx.team.name}
         />
       </div>
       <div className="relative left-1/2 -ml-[min(800px,calc(50vw-1rem))] mt-6 grid w-[min(1600px,calc(100vw-2rem))] gap-4 px-4 lg:grid-cols-2 xl:grid-cols-3">
