@@ -102,16 +102,22 @@ export function LoadingDesk({
     >
       {readOnly ? <ReadOnlyBanner teamName={teamName} /> : null}
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor="scenario-name" className="sr-only">
-          Scenario name
-        </label>
-        <input
-          id="scenario-name"
-          value={m.name}
-          readOnly={readOnly}
-          onChange={(e) => dispatch({ type: "name", name: e.target.value })}
-          className="min-w-0 flex-1 rounded-md border border-transparent bg-transparent px-2 py-1 font-display text-xl font-semibold hover:border-glaze-line focus:border-glaze-line"
-        />
+        {readOnly ? (
+          // Read-only: the values are text, not inputs that only refuse to change.
+          <h2 className="min-w-0 flex-1 px-2 py-1 font-display text-xl font-semibold">{m.name}</h2>
+        ) : (
+          <>
+            <label htmlFor="scenario-name" className="sr-only">
+              Scenario name
+            </label>
+            <input
+              id="scenario-name"
+              value={m.name}
+              onChange={(e) => dispatch({ type: "name", name: e.target.value })}
+              className="min-w-0 flex-1 rounded-md border border-transparent bg-transparent px-2 py-1 font-display text-xl font-semibold hover:border-glaze-line focus:border-glaze-line"
+            />
+          </>
+        )}
         <span role="status" className="text-xs text-verdigris-dark">
           {linkNote}
         </span>

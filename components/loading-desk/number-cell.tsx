@@ -28,10 +28,16 @@ export function NumberCell({ value, label, integer, min, disabled, onCommit }: N
   const commit = () => {
     if (valid && n !== value) onCommit(n);
   };
+  // Read-only: the value as text, readable and copyable, with the same accessible name.
+  if (disabled)
+    return (
+      <span aria-label={label} className="font-mono text-xs">
+        {value}
+      </span>
+    );
   return (
     <input
       value={text}
-      disabled={disabled}
       inputMode="decimal"
       aria-label={label}
       aria-invalid={!valid || undefined}

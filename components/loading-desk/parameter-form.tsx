@@ -46,6 +46,12 @@ function toNumber(f: ParameterField) {
   };
 }
 
+/** A value as the read-only desk shows it: a choice in words, a blank optional value as "off". */
+function shownValue(f: ParameterField, value: unknown): string {
+  if (value === null || value === undefined || value === "") return "off";
+  return f.kind === "choice" ? choiceText(f, String(value)) : String(value);
+}
+
 export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
   const form = useForm<ParameterSetInput>({
     resolver: zodResolver(parameterSetSchema),
@@ -114,7 +120,12 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                       <span className="truncate text-xs text-ink-faint">{unitFor(f, law)}</span>
                     ) : null}
                   </label>
-                  {f.kind === "choice" ? (
+                  {readOnly ? (
+                    // Read-only: the value as text (same id, so the label still names it).
+                    <output id={id} className="mt-0.5 block w-full px-2 py-1 font-mono text-sm">
+                      {shownValue(f, set[name])}
+                    </output>
+                  ) : f.kind === "choice" ? (
                     <select
                       id={id}
                       {...form.register(name)}

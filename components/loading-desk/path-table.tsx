@@ -37,22 +37,25 @@ export function PathTable({ doc, readOnly, onChange }: PathTableProps) {
       {DIRS.map((d, c) => (
         <td key={d} className="px-1">
           <div className="flex gap-1">
-            <select
-              aria-label={`${label}: control of ${d}`}
-              disabled={readOnly}
-              value={leg.control[c]}
-              onChange={(e) =>
-                onChange(
-                  updateLeg(doc, at, (l) =>
-                    setComponent(l, c as 0 | 1 | 2, e.target.value as ControlKind, l.target[c]),
-                  ),
-                )
-              }
-              className="rounded border border-glaze-line bg-white text-xs"
-            >
-              <option value="strain">strain</option>
-              <option value="stress">stress</option>
-            </select>
+            {readOnly ? (
+              <span className="text-xs text-ink-soft">{leg.control[c]}</span>
+            ) : (
+              <select
+                aria-label={`${label}: control of ${d}`}
+                value={leg.control[c]}
+                onChange={(e) =>
+                  onChange(
+                    updateLeg(doc, at, (l) =>
+                      setComponent(l, c as 0 | 1 | 2, e.target.value as ControlKind, l.target[c]),
+                    ),
+                  )
+                }
+                className="rounded border border-glaze-line bg-white text-xs"
+              >
+                <option value="strain">strain</option>
+                <option value="stress">stress</option>
+              </select>
+            )}
             <NumberCell
               value={leg.target[c]}
               label={`${label}: target of ${d} (${leg.control[c] === "strain" ? "mm/mm" : "MPa"})`}

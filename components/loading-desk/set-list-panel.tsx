@@ -67,15 +67,18 @@ export function SetListPanel({
                 />
                 <span aria-hidden className="h-3 w-6 rounded-sm" style={{ background: e.color }} />
                 <span className="font-mono text-xs text-ink-faint">{e.set.id}</span>
-                <input
-                  value={e.set.label}
-                  onChange={(ev) =>
-                    dispatch({ type: "rename", id: e.set.id, label: ev.target.value })
-                  }
-                  readOnly={readOnly}
-                  aria-label={`Name of set ${e.set.id}`}
-                  className="min-w-0 flex-1 truncate rounded border border-transparent bg-transparent px-1 text-sm hover:border-glaze-line focus:border-glaze-line"
-                />
+                {readOnly ? (
+                  <span className="min-w-0 flex-1 truncate px-1 text-sm">{e.set.label}</span>
+                ) : (
+                  <input
+                    value={e.set.label}
+                    onChange={(ev) =>
+                      dispatch({ type: "rename", id: e.set.id, label: ev.target.value })
+                    }
+                    aria-label={`Name of set ${e.set.id}`}
+                    className="min-w-0 flex-1 truncate rounded border border-transparent bg-transparent px-1 text-sm hover:border-glaze-line focus:border-glaze-line"
+                  />
+                )}
               </div>
               <div className="mt-1 flex flex-wrap items-center gap-1 pl-6">
                 <button
