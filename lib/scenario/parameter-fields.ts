@@ -55,7 +55,7 @@ export const PARAMETER_FIELDS: readonly ParameterField[] = [
     label: "Poisson ratio",
     unit: "–",
     meaning: "Major Poisson ratio (ν21 = ν12·E2/E1)",
-    range: "|nu12| < sqrt(E1/E2)",
+    range: "|nu12| < √(E1/E2)",
     kind: "number",
   },
   {
@@ -88,7 +88,7 @@ export const PARAMETER_FIELDS: readonly ParameterField[] = [
     unit: SLOPE_UNITS.sqrtY,
     unitByLaw: SLOPE_UNITS,
     meaning: "Slope of d1 versus √Ȳ1 (or versus Ȳ1 with the law linear in Ȳ)",
-    range: "> 0 and a1·sqrt(Y0_1) < 1 (sqrtY); > 0 and 2·a1·Y0_1 < 1 (linY)",
+    range: "> 0 and a1·√Y0_1 < 1 (sqrtY); > 0 and 2·a1·Y0_1 < 1 (linY)",
     kind: "number",
   },
   {
@@ -97,7 +97,7 @@ export const PARAMETER_FIELDS: readonly ParameterField[] = [
     unit: SLOPE_UNITS.sqrtY,
     unitByLaw: SLOPE_UNITS,
     meaning: "Slope of d2 versus √Ȳ2 (or versus Ȳ2 with the law linear in Ȳ)",
-    range: "> 0 and a2·sqrt(Y0_2) < 1 (sqrtY); > 0 and 2·a2·Y0_2 < 1 (linY)",
+    range: "> 0 and a2·√Y0_2 < 1 (sqrtY); > 0 and 2·a2·Y0_2 < 1 (linY)",
     kind: "number",
   },
   {

@@ -52,7 +52,7 @@ describe("checkRefineBounds", () => {
     const start = { ...DEMO_PARAMS, E1: 4000, E2: 16000, nu12: 0.3 };
     expect(checkRefineBounds(start, ["nu12"], { nu12: [0, 0.49] })).toEqual([]);
     expect(checkRefineBounds(start, ["nu12"], { nu12: [0, 0.5] })).toEqual([
-      "nu12 (Poisson ratio): the upper bound 0.5 is outside the admissible range (|nu12| < sqrt(E1/E2)).",
+      "nu12 (Poisson ratio): the upper bound 0.5 is outside the admissible range (|nu12| < √(E1/E2)).",
     ]);
   });
 

@@ -9,7 +9,7 @@ describe("unit and range for the law in use", () => {
     expect(unitFor(field("a1"), "sqrtY")).toBe("MPa⁻⁰·⁵");
     expect(unitFor(field("a1"), "linY")).toBe("MPa⁻¹");
     expect(unitFor(field("a2"), "linY")).toBe("MPa⁻¹");
-    expect(rangeFor(field("a1"), "sqrtY")).toBe("> 0 and a1·sqrt(Y0_1) < 1");
+    expect(rangeFor(field("a1"), "sqrtY")).toBe("> 0 and a1·√Y0_1 < 1");
     expect(rangeFor(field("a2"), "linY")).toBe("> 0 and 2·a2·Y0_2 < 1");
   });
 
