@@ -2,7 +2,9 @@ import { and, desc, eq } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { conformanceChecks, type ConformanceCheckRow } from "@/db/schema/conformance-checks";
+import { scenarioRevisions } from "@/db/schema/scenarios";
 import { users } from "@/db/schema/users";
+import { largestDeviation, type ConformanceVerdict } from "@/lib/shared/conformance-verdict";
 
 export async function insertConformanceCheck(
   db: Executor,
@@ -41,4 +43,40 @@ export async function findConformanceCheck(
     .from(conformanceChecks)
     .where(and(eq(conformanceChecks.id, checkId), eq(conformanceChecks.revisionId, revisionId)));
   return row ?? null;
+}
+
+/** The newest check of one revision of a team's scenario, as a verdict; null when none. */
+export async function findLatestConformanceVerdict(
+  db: Executor,
+  teamId: string,
+  scenarioId: string,
+  number: number,
+): Promise<ConformanceVerdict | null> {
+  const [row] = await db
+    .select({
+      passed: conformanceChecks.passed,
+      createdAt: conformanceChecks.createdAt,
+      fileName: conformanceChecks.fileName,
+      firstFailIncrement: conformanceChecks.firstFailIncrement,
+      result: conformanceChecks.result,
+    })
+    .from(conformanceChecks)
+    .innerJoin(scenarioRevisions, eq(scenarioRevisions.id, conformanceChecks.revisionId))
+    .where(
+      and(
+        eq(conformanceChecks.teamId, teamId),
+        eq(scenarioRevisions.scenarioId, scenarioId),
+        eq(scenarioRevisions.number, number),
+      ),
+    )
+    .orderBy(desc(conformanceChecks.createdAt), desc(conformanceChecks.id))
+    .limit(1);
+  if (!row) return null;
+  return {
+    passed: row.passed,
+    checkedAt: row.createdAt.toISOString(),
+    fileName: row.fileName,
+    firstFailIncrement: row.firstFailIncrement,
+    largest: largestDeviation(row.result.quantities),
+  };
 }
