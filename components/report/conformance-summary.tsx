@@ -1,4 +1,5 @@
 import type { CalibrationReport } from "@/lib/server/handoff/report/load-report";
+import { largestDeviation } from "@/lib/shared/conformance-verdict";
 import { quantitySymbol } from "@/lib/shared/quantity-symbols";
 
 /** The conformance checks recorded on the revision, newest first, with their worst deviations. */
@@ -23,9 +24,7 @@ export function ConformanceSummary({ checks }: { checks: CalibrationReport["chec
       </thead>
       <tbody>
         {checks.map((c) => {
-          const worst = [...c.result.quantities].sort(
-            (a, b) => b.maxAbs / b.tolerance - a.maxAbs / a.tolerance,
-          )[0];
+          const worst = largestDeviation(c.result.quantities);
           return (
             <tr key={c.id} className="border-b border-glaze-line">
               <td className="py-0.5">{c.createdAt.toISOString().slice(0, 10)}</td>

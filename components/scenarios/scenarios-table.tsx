@@ -16,6 +16,7 @@ import {
 import type { ScenarioListResponse } from "@/lib/client/data/types";
 import { useScenarioList } from "@/lib/client/data/use-scenario-list";
 
+import { ConformanceCell } from "./conformance-cell";
 import { Pager } from "./pager";
 import { ReviewBadge } from "./review-badge";
 import { ScenarioFilters } from "./scenario-filters";
@@ -69,6 +70,7 @@ export function ScenariosTable({ slug, authors, initial }: ScenariosTableProps) 
                 state={state}
                 onSort={(c) => go(toggleSort(state, c))}
               />
+              <th className="px-3 py-2 font-medium">Conformance</th>
               <SortHeader
                 label="Updated"
                 column="updated"
@@ -112,6 +114,9 @@ export function ScenariosTable({ slug, authors, initial }: ScenariosTableProps) 
                 <td className="px-3 py-2">
                   <ReviewBadge state={s.latestRevision.reviewState} />
                 </td>
+                <td className="px-3 py-2">
+                  <ConformanceCell verdict={s.conformance} />
+                </td>
                 <td className="whitespace-nowrap px-3 py-2 text-ink-soft">
                   {formatWhen(s.updatedAt)}
                 </td>
@@ -120,7 +125,7 @@ export function ScenariosTable({ slug, authors, initial }: ScenariosTableProps) 
             ))}
             {data && data.items.length === 0 ? (
               <tr>
-                <td colSpan={6} className="px-3 py-6 text-center text-ink-soft">
+                <td colSpan={7} className="px-3 py-6 text-center text-ink-soft">
                   {state.tag || state.review || state.author
                     ? "No scenario matches these filters."
                     : "No scenarios yet."}

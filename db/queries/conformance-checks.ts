@@ -1,8 +1,10 @@
-import { and, desc, eq } from "drizzle-orm";
+import { and, asc, desc, eq, inArray } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { conformanceChecks, type ConformanceCheckRow } from "@/db/schema/conformance-checks";
+import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { users } from "@/db/schema/users";
+import { largestDeviation, type ConformanceVerdict } from "@/lib/shared/conformance-verdict";
 
 export async function insertConformanceCheck(
   db: Executor,
@@ -41,4 +43,83 @@ export async function findConformanceCheck(
     .from(conformanceChecks)
     .where(and(eq(conformanceChecks.id, checkId), eq(conformanceChecks.revisionId, revisionId)));
   return row ?? null;
+}
+
+/** The newest check of one revision of a team's scenario, as a verdict; null when none. */
+export async function findLatestConformanceVerdict(
+  db: Executor,
+  teamId: string,
+  scenarioId: string,
+  number: number,
+): Promise<ConformanceVerdict | null> {
+  const [row] = await db
+    .select({
+      passed: conformanceChecks.passed,
+      createdAt: conformanceChecks.createdAt,
+      fileName: conformanceChecks.fileName,
+      firstFailIncrement: conformanceChecks.firstFailIncrement,
+      result: conformanceChecks.result,
+    })
+    .from(conformanceChecks)
+    .innerJoin(scenarioRevisions, eq(scenarioRevisions.id, conformanceChecks.revisionId))
+    .where(
+      and(
+        eq(conformanceChecks.teamId, teamId),
+        eq(scenarioRevisions.scenarioId, scenarioId),
+        eq(scenarioRevisions.number, number),
+      ),
+    )
+    .orderBy(desc(conformanceChecks.createdAt), desc(conformanceChecks.id))
+    .limit(1);
+  if (!row) return null;
+  return {
+    passed: row.passed,
+    checkedAt: row.createdAt.toISOString(),
+    fileName: row.fileName,
+    firstFailIncrement: row.firstFailIncrement,
+    largest: largestDeviation(row.result.quantities),
+  };
+}
+
+export interface LatestRevisionVerdict {
+  passed: boolean;
+  checkedAt: string;
+}
+
+/**
+ * For each of a team's scenarios, the newest check of its latest revision (the scenarios
+ * table's column), in one query for the whole page; scenarios without one are absent.
+ */
+export async function listLatestVerdictsOfLatestRevisions(
+  db: Executor,
+  teamId: string,
+  scenarioIds: readonly string[],
+): Promise<Map<string, LatestRevisionVerdict>> {
+  if (scenarioIds.length === 0) return new Map();
+  const rows = await db
+    .selectDistinctOn([scenarios.id], {
+      scenarioId: scenarios.id,
+      passed: conformanceChecks.passed,
+      createdAt: conformanceChecks.createdAt,
+    })
+    .from(conformanceChecks)
+    .innerJoin(scenarioRevisions, eq(scenarioRevisions.id, conformanceChecks.revisionId))
+    .innerJoin(
+      scenarios,
+      and(
+        eq(scenarios.id, scenarioRevisions.scenarioId),
+        eq(scenarios.latestRevision, scenarioRevisions.number),
+      ),
+    )
+    .where(
+      and(
+        eq(scenarios.teamId, teamId),
+        eq(conformanceChecks.teamId, teamId),
+        inArray(scenarios.id, [...scenarioIds]),
+      ),
+    )
+    .orderBy(asc(scenarios.id), desc(conformanceChecks.createdAt), desc(conformanceChecks.id));
+  return new Map(
+    rows.map((r) => [r.scenarioId, { passed: r.passed, checkedAt: r.createdAt.toISOString() }]),
+  );
 }

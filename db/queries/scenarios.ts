@@ -6,6 +6,7 @@ import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { users } from "@/db/schema/users";
 import type { ScenarioListQuery } from "@/lib/shared/validations/workspace";
 
+import { listLatestVerdictsOfLatestRevisions } from "./conformance-checks";
 import { personRef } from "./users-view";
 
 // Read-side queries for the scenario aggregate. Callers have authorized the team already;
@@ -98,7 +99,17 @@ export async function listScenariosForTeam(db: Executor, teamId: string, q: Scen
       .orderBy(...order),
     db.select({ n: count() }).from(scenarios).where(where),
   ]);
-  return { items: rows.map(toScenarioSummary), total: total.n, page: q.page, pageSize: q.pageSize };
+  const verdicts = await listLatestVerdictsOfLatestRevisions(
+    db,
+    teamId,
+    rows.map((r) => r.id),
+  );
+  const items = rows.map((row) => ({
+    ...toScenarioSummary(row),
+    /** The newest conformance check of the latest revision; null when it has none. */
+    conformance: verdicts.get(row.id) ?? null,
+  }));
+  return { items, total: total.n, page: q.page, pageSize: q.pageSize };
 }
 
 export async function findScenarioSummary(db: Executor, teamId: string, scenarioId: string) {

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 
+import { HandoffPanel } from "@/components/handoff/handoff-panel";
 import { QueryProvider } from "@/components/providers/query-provider";
 import { ReviewPanel } from "@/components/reviews/review-panel";
 import { RevisionHistory } from "@/components/scenarios/revision-history";
@@ -9,6 +10,7 @@ import { ScenarioEditorLoader } from "@/components/scenarios/scenario-editor-loa
 import { ScenarioHeader } from "@/components/scenarios/scenario-header";
 import { ShareLinksPanel } from "@/components/share/share-links-panel";
 import { getDb } from "@/db/index";
+import { findLatestConformanceVerdict } from "@/db/queries/conformance-checks";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { can } from "@/lib/shared/permissions";
 import { getActor } from "@/lib/server/accounts/auth/session";
@@ -33,9 +35,13 @@ export default async function ScenarioPage({
   const query = await searchParams;
   const rev = revisionParam(query.rev);
   const overlay = revisionParam(query.overlay);
-  const data = await loadScenarioPage(getDb(), ctx.team.id, id, rev, overlay);
+  const db = getDb();
+  const data = await loadScenarioPage(db, ctx.team.id, id, rev, overlay);
   const { summary, number, meta, current, other } = data;
-  const actor = await getActor();
+  const [actor, latestCheck] = await Promise.all([
+    getActor(),
+    findLatestConformanceVerdict(db, ctx.team.id, summary.id, number),
+  ]);
   const latest = summary.latestRevision.number;
   const editable = can(ctx.role, "scenario:edit") && number === latest && !other;
   const file = other
@@ -119,6 +125,12 @@ export default async function ScenarioPage({
           canJudge={can(ctx.role, "review:verdict")}
           canComment={can(ctx.role, "comment:write")}
           maxIncrement={current.scenario.path.legs.reduce((n, l) => n + l.increments, 0)}
+        />
+        <HandoffPanel
+          team={ctx.team.slug}
+          scenarioId={summary.id}
+          revision={number}
+          latest={latestCheck}
         />
         {can(ctx.role, "share:create") ? (
           <ShareLinksPanel slug={ctx.team.slug} scenarioId={summary.id} number={number} />
