@@ -26,7 +26,7 @@ export function AwaitingReviewCard({ slug, items }: { slug: string; items: Await
                 {r.importedRequester != null
                   ? importedPersonText(r.importedRequester)
                   : personName(r.requestedBy)}
-                , {formatWhen(r.requestedAt)}
+                {r.requestedAt ? `, ${formatWhen(r.requestedAt)}` : ""}
               </p>
             </li>
           ))}
