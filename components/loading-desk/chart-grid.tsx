@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { ResultChart } from "@/components/charts/result-chart";
 import {
   FIXED_CHARTS,
@@ -11,6 +11,10 @@ import {
   stressStrainDef,
 } from "@/lib/client/loading-desk/chart-defs";
 import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
+import {
+  setIncrementCursor,
+  useIncrementCursor,
+} from "@/lib/client/loading-desk/increment-cursor-store";
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import type { SetEntry } from "@/lib/client/loading-desk/set-list";
 import { IncrementCursor } from "./increment-cursor";
@@ -35,7 +39,9 @@ export function ChartGrid({
 }: ChartGridProps) {
   const [x, setX] = useState<StrainComponent>("eps11");
   const [y, setY] = useState<StressComponent>("sig11");
-  const [cursor, setCursor] = useState<number | null>(null);
+  const [cursor, setCursor] = useIncrementCursor();
+  // The cursor belongs to this desk: leaving the page must not carry it to the next scenario.
+  useEffect(() => () => setIncrementCursor(null), []);
   const ssDef = useMemo(() => stressStrainDef(x, y), [x, y]);
   const common = { store, entries, cursor, onCursor: setCursor, scenarioName };
   const pickers = (

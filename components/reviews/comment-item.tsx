@@ -4,6 +4,7 @@ import { useState } from "react";
 
 import { formatWhen, personName } from "@/lib/client/data/format";
 import { isPending, type NewComment } from "@/lib/client/data/optimistic-comments";
+import { useIncrementCursor } from "@/lib/client/loading-desk/increment-cursor-store";
 import type { CommentNode } from "@/lib/client/data/types";
 import { importedPersonText } from "@/lib/shared/imported-names";
 
@@ -30,11 +31,7 @@ export function CommentItem({ comment, canReply, maxIncrement, onReply }: Commen
         </span>
         , {pending ? "sending…" : formatWhen(comment.createdAt)}
         {comment.editedAt ? " (edited)" : ""}
-        {comment.increment !== null ? (
-          <span className="ml-2 rounded bg-verdigris-light px-1.5 text-verdigris-dark">
-            at increment {comment.increment}
-          </span>
-        ) : null}
+        {comment.increment !== null ? <PinnedIncrement increment={comment.increment} /> : null}
       </p>
       <p className="whitespace-pre-wrap">{comment.body}</p>
       {canReply && !pending && !replying ? (
@@ -76,5 +73,28 @@ export function CommentItem({ comment, canReply, maxIncrement, onReply }: Commen
         </ul>
       ) : null}
     </li>
+  );
+}
+
+/**
+ * The increment a comment is pinned to: a button that moves the loading desk's increment cursor
+ * there, so every chart marks that increment, and brings the cursor into view.
+ */
+function PinnedIncrement({ increment }: { increment: number }) {
+  const [cursor, setCursor] = useIncrementCursor();
+  const shown = cursor === increment;
+  return (
+    <button
+      type="button"
+      aria-pressed={shown}
+      title={`Move the increment cursor to increment ${increment} and mark it on the charts`}
+      onClick={() => {
+        setCursor(increment);
+        document.getElementById("increment-cursor")?.scrollIntoView?.({ block: "center" });
+      }}
+      className={`ml-2 rounded px-1.5 underline-offset-2 hover:underline ${shown ? "bg-verdigris text-white" : "bg-verdigris-light text-verdigris-dark"}`}
+    >
+      at increment {increment}
+    </button>
   );
 }

@@ -4,9 +4,11 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { getDb } from "@/db/index";
 import { requireTeamRole } from "@/lib/server/access/guard";
-import { ROLE_LABELS } from "@/lib/shared/permissions";
+import { can, ROLE_LABELS } from "@/lib/shared/permissions";
+import { listAwaitingReview } from "@/db/queries/awaiting-review";
 import { listMembers } from "@/db/queries/teams";
 
+import { AwaitingReviewCard } from "./awaiting-review-card";
 import { TeamNav } from "./team-nav";
 
 export const metadata: Metadata = { title: "Team" };
@@ -14,11 +16,16 @@ export const metadata: Metadata = { title: "Team" };
 export default async function TeamHomePage({ params }: { params: Promise<{ team: string }> }) {
   const { team: slug } = await params;
   const ctx = await requireTeamRole(slug, "team:read");
-  const members = await listMembers(getDb(), ctx.team.id);
+  const mayJudge = can(ctx.role, "review:verdict");
+  const [members, awaiting] = await Promise.all([
+    listMembers(getDb(), ctx.team.id),
+    mayJudge ? listAwaitingReview(getDb(), { teamId: ctx.team.id, userId: ctx.actor.id }) : [],
+  ]);
   return (
     <>
       <TeamNav slug={ctx.team.slug} name={ctx.team.name} role={ctx.role} />
       <div className="grid gap-6 md:grid-cols-2">
+        {mayJudge ? <AwaitingReviewCard slug={ctx.team.slug} items={awaiting} /> : null}
         <Card title="Scenarios" id="scenarios">
           <p className="text-sm text-ink-soft">
             Saved paths and parameter sets, with their revisions and reviews.
