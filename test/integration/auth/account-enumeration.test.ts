@@ -1,5 +1,5 @@
 import { eq } from "drizzle-orm";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 
 import { users } from "@/db/schema/users";
 import { requestPasswordReset } from "@/lib/server/accounts/password-reset";
@@ -12,6 +12,10 @@ import type { MailDeps } from "@/lib/shared/mail-types";
 import { makeUser, openTestDb, queuedMailTo, recordingMailer, unique } from "../support/db";
 import { outcome } from "../support/outcome";
 import { makeTeamWithAllRoles } from "../support/team";
+
+// A time limit, not a speed goal: sign-up hashes a password per attempt (scrypt, N = 2^17); under
+// load the limit test outlasts 30 s.
+vi.setConfig({ testTimeout: 120000 });
 
 const db = openTestDb();
 const PASSWORD = "twelve chars or more";

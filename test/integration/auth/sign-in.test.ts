@@ -1,7 +1,7 @@
 import { scryptSync } from "node:crypto";
 
 import { eq } from "drizzle-orm";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 
 import { users } from "@/db/schema/users";
 import { authenticate } from "@/lib/server/accounts/sign-in";
@@ -9,6 +9,10 @@ import { hitRateLimit, RATE_LIMITS } from "@/lib/server/access/rate-limit";
 
 import { makeUser, openTestDb, TEST_PASSWORD, unique } from "../support/db";
 import { failedField, outcome } from "../support/outcome";
+
+// A time limit, not a speed goal: the lock-out tests hash a password per attempt (scrypt, N =
+// 2^17); under load they outlast 30 s.
+vi.setConfig({ testTimeout: 120000 });
 
 const db = openTestDb();
 

@@ -1,7 +1,11 @@
 import path from "node:path";
 
 import { ESLint } from "eslint";
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
+
+// A time limit, not a speed goal: each case starts ESLint with the project's type-aware config,
+// which alone can take 15 s on a busy machine.
+vi.setConfig({ testTimeout: 60000 });
 
 // The walls between the bands of lib/ live in eslint.config.mjs; this lints invented source
 // text at invented paths through the real config, so a wall that stops working fails here.

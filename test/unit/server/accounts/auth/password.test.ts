@@ -1,4 +1,4 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 
 import { scryptSync } from "node:crypto";
 
@@ -8,6 +8,10 @@ import {
   needsRehash,
   verifyPassword,
 } from "@/lib/server/accounts/auth/password";
+
+// A time limit, not a speed goal: scrypt at N = 2^17 takes a few hundred ms per hash alone; on a
+// busy two-core machine a test of several hashes outlasts the default 5 s.
+vi.setConfig({ testTimeout: 60000 });
 
 describe("scrypt password hashing", () => {
   it("accepts the password it hashed and refuses others", async () => {
