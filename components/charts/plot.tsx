@@ -5,6 +5,7 @@
  */
 import dynamic from "next/dynamic";
 import type { PlotParams } from "react-plotly.js/factory";
+import { STAMP_TOP } from "@/lib/client/loading-desk/image-stamp";
 
 const loadPlotly = () => import("plotly.js-dist-min").then((m) => m.default);
 
@@ -25,18 +26,31 @@ export function Plot(props: PlotProps) {
   return <PlotlyComponent {...props} />;
 }
 
-/** Downloads a drawn chart as PNG (2× pixels) or SVG at full data resolution of what is drawn. */
+/**
+ * Downloads a drawn chart as PNG (2× pixels) or SVG at full data resolution of what is drawn.
+ * `layoutFor` may change the saved image's layout (the stamp) without touching the chart on screen.
+ */
 export async function saveChartImage(
   graphDiv: HTMLElement,
   format: "png" | "svg",
   filename: string,
+  layoutFor?: (layout: Record<string, unknown>) => Record<string, unknown>,
 ): Promise<void> {
   const Plotly = await loadPlotly();
-  await Plotly.downloadImage(graphDiv, {
-    format,
-    filename,
-    width: graphDiv.clientWidth || 800,
-    height: graphDiv.clientHeight || 500,
-    scale: format === "png" ? 2 : 1,
-  } as Parameters<typeof Plotly.downloadImage>[1]);
+  const drawn = graphDiv as HTMLElement & { data: unknown[]; layout: Record<string, unknown> };
+  const figure = { data: drawn.data, layout: layoutFor ? layoutFor(drawn.layout) : drawn.layout };
+  const url = await Plotly.toImage(
+    figure as never,
+    {
+      format,
+      width: graphDiv.clientWidth || 800,
+      // the stamp's lines get their own room above the plot (STAMP_TOP of image-stamp.ts)
+      height: (graphDiv.clientHeight || 500) + (layoutFor ? STAMP_TOP : 0),
+      scale: format === "png" ? 2 : 1,
+    } as Parameters<typeof Plotly.toImage>[1],
+  );
+  const link = document.createElement("a");
+  link.href = url;
+  link.download = `${filename}.${format}`;
+  link.click();
 }

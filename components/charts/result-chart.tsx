@@ -5,6 +5,7 @@ import type { ChartDef } from "@/lib/client/loading-desk/chart-defs";
 import { type ChartOverlay, overlayTraces } from "@/lib/client/loading-desk/chart-overlays";
 import { buildChart, type TraceSource } from "@/lib/client/loading-desk/chart-traces";
 import { chartImageName } from "@/lib/client/loading-desk/file-names";
+import { imageStamp, stampedLayout } from "@/lib/client/loading-desk/image-stamp";
 import { emitEvent } from "@/lib/client/loading-desk/instrumentation";
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import type { SetEntry } from "@/lib/client/loading-desk/set-list";
@@ -21,6 +22,8 @@ export interface ResultChartProps {
   cursor: number | null;
   onCursor: (step: number) => void;
   scenarioName: string;
+  /** "revision 4" when a saved revision is open, else null: stamped on saved images. */
+  revision?: string | null;
   /** Extra controls in the chart's heading (e.g. the component pickers). */
   controls?: React.ReactNode;
   /** Measured curves drawn when their axes are this chart's. */
@@ -34,6 +37,7 @@ export function ResultChart({
   cursor,
   onCursor,
   scenarioName,
+  revision = null,
   controls,
   overlays = NO_OVERLAYS,
 }: ResultChartProps) {
@@ -79,8 +83,16 @@ export function ResultChart({
   };
 
   const save = (format: "png" | "svg") => {
-    if (graph.current)
-      void saveChartImage(graph.current, format, chartImageName(scenarioName, def.title));
+    if (!graph.current) return;
+    const stamp = imageStamp({
+      chartTitle: def.title,
+      scenarioName,
+      revision,
+      sets: entries.filter((e) => e.visible).map((e) => ({ id: e.set.id, label: e.set.label })),
+    });
+    void saveChartImage(graph.current, format, chartImageName(scenarioName, def.title), (l) =>
+      stampedLayout(l, stamp),
+    );
   };
 
   return (

@@ -23,6 +23,8 @@ export interface ChartGridProps {
   store: ResultsStore;
   entries: SetEntry[];
   scenarioName: string;
+  /** "revision 4" when a saved revision is open; stamped on saved images. */
+  revision?: string | null;
   totalIncrements: number;
   overlays?: readonly ChartOverlay[];
 }
@@ -34,6 +36,7 @@ export function ChartGrid({
   store,
   entries,
   scenarioName,
+  revision = null,
   totalIncrements,
   overlays,
 }: ChartGridProps) {
@@ -43,7 +46,7 @@ export function ChartGrid({
   // The cursor belongs to this desk: leaving the page must not carry it to the next scenario.
   useEffect(() => () => setIncrementCursor(null), []);
   const ssDef = useMemo(() => stressStrainDef(x, y), [x, y]);
-  const common = { store, entries, cursor, onCursor: setCursor, scenarioName };
+  const common = { store, entries, cursor, onCursor: setCursor, scenarioName, revision };
   const pickers = (
     <span className="flex items-center gap-1 text-xs">
       <select

@@ -194,6 +194,7 @@ export function LoadingDesk({
               store={store}
               entries={m.entries}
               scenarioName={m.name}
+              revision={revision}
               totalIncrements={totalIncrements}
               overlays={overlays}
             />

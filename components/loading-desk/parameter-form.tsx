@@ -63,9 +63,12 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
   const values = useWatch({ control: form.control }) as Record<string, unknown>;
   const found = plausibilityWarnings(values);
   const warnings = new Map(found.map((w) => [w.field, w.message]));
+  // A field can be both refused by the schema and implausible (E1 = -5): name it once.
   const invalid = [
-    ...Object.keys(errors),
-    ...found.filter((w) => w.severity === "implausible").map((w) => w.field),
+    ...new Set([
+      ...Object.keys(errors),
+      ...found.filter((w) => w.severity === "implausible").map((w) => w.field),
+    ]),
   ];
 
   useEffect(() => {

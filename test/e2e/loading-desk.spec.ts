@@ -195,7 +195,11 @@ describe("sandbox loading desk", () => {
       page.getByRole("button", { name: /Save Stress–strain.* as SVG/ }).click(),
     ]);
     expect(download.suggestedFilename()).toMatch(/^craquelure-.*-stress-strain-.*\.svg$/);
-    expect(readFileSync((await download.path())!, "utf8")).toContain("<svg");
+    const svg = readFileSync((await download.path())!, "utf8");
+    expect(svg).toContain("<svg");
+    // the image says what it shows once it travels alone: sets, date, the caution
+    expect(svg).toContain("Sets: A");
+    expect(svg).toContain("no design allowable");
   });
 
   it("shows where an imported file is wrong", async () => {
