@@ -14,7 +14,8 @@
 import type { TestType } from "@/lib/csv/record-schema";
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { FITTABLE, type FittableParam } from "./refine-params";
-import type { TestRecordInput } from "./types";
+import { labelOf } from "@/lib/scenario/parameter-fields";
+import { recordName, type TestRecordInput } from "./types";
 
 /** Follower → leader under in-plane isotropy (G12 follows E1 through E1/(2(1 + nu12))). */
 export const ISOTROPIC_TIES = {
@@ -100,4 +101,36 @@ export function planRefinement(
     tied: isotropic ? [...FOLLOWERS] : [],
     notInformed: inOrder.filter((k) => !informed.has(k)),
   };
+}
+
+/**
+ * What the fit did, in words (shown with the result): the records by name, then the warnings.
+ */
+export function refineNotes(
+  records: TestRecordInput[],
+  left: TestRecordInput[],
+  plan: RefinePlan,
+): string[] {
+  return [
+    `records used: ${records.map(recordName).join(", ") || "none"}`,
+    ...refineWarnings(left, plan),
+  ];
+}
+
+/** What a saved refinement keeps as warnings: records left out, the isotropy tie, values kept. */
+export function refineWarnings(left: TestRecordInput[], plan: RefinePlan): string[] {
+  const warnings: string[] = [];
+  if (left.length > 0)
+    warnings.push(
+      `left out (this test type cannot be replayed): ${left.map(recordName).join(", ")}`,
+    );
+  if (plan.isotropic)
+    warnings.push(
+      "in-plane isotropic: E2 = E1, Y0_2 = Y0_1, a2 = a1, beta = alpha and G12 = E1/(2(1 + nu12)) kept tied",
+    );
+  if (plan.notInformed.length > 0)
+    warnings.push(
+      `not informed by these records, kept at the start value: ${plan.notInformed.map(labelOf).join(", ")}`,
+    );
+  return warnings;
 }

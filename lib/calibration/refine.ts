@@ -11,11 +11,10 @@ import { cleanRecord } from "./clean";
 import { decimationIndices } from "./decimate";
 import { inseparableParams, type Inseparable } from "./identifiability";
 import { assertRefineBounds } from "./refine-bounds-check";
-import { labelOf } from "@/lib/scenario/parameter-fields";
-import { applyIsotropicTies, planRefinement, type RefinePlan } from "./refine-plan";
+import { applyIsotropicTies, planRefinement, refineNotes } from "./refine-plan";
 import { paramVector, type Bounds, type FittableParam } from "./refine-params";
 import { canReplay, replayRecord } from "./replay";
-import { recordName, type RecordPoints, type TestRecordInput } from "./types";
+import type { RecordPoints, TestRecordInput } from "./types";
 
 export interface RefineProgress {
   round: number;
@@ -180,26 +179,6 @@ export function refine(
     ...plan,
     notes: refineNotes(usable, left, plan),
   };
-}
-
-/** What the fit did, in words: the records by name, the isotropy tie, the values kept. */
-function refineNotes(
-  records: TestRecordInput[],
-  left: TestRecordInput[],
-  plan: RefinePlan,
-): string[] {
-  const notes = [`records used: ${records.map(recordName).join(", ") || "none"}`];
-  if (left.length > 0)
-    notes.push(`left out (this test type cannot be replayed): ${left.map(recordName).join(", ")}`);
-  if (plan.isotropic)
-    notes.push(
-      "in-plane isotropic: E2 = E1, Y0_2 = Y0_1, a2 = a1, beta = alpha and G12 = E1/(2(1 + nu12)) kept tied",
-    );
-  if (plan.notInformed.length > 0)
-    notes.push(
-      `not informed by these records, kept at the start value: ${plan.notInformed.map(labelOf).join(", ")}`,
-    );
-  return notes;
 }
 
 /** Forward-difference Jacobian of the scaled model at u (rows: samples). */
