@@ -8,6 +8,7 @@ import { FieldError } from "@/components/ui/field";
 import type { TestRecordSummary } from "@/db/queries/test-records";
 import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
 import type { RefineResult } from "@/lib/calibration/refine";
+import { REFINED, refinedValueMarks } from "@/lib/calibration/refined-value-marks";
 import { FITTABLE, type FittableParam } from "@/lib/calibration/refine-params";
 import type { IdentifyResponse } from "@/lib/server/records/identify-records";
 
@@ -124,8 +125,9 @@ export function CalibrationWorkspace({
               <h3 className="font-medium">Refined values</h3>
               <ParamsTable
                 params={refined.result.params}
-                identified={refined.free}
-                sourceWord="refined"
+                identified={refined.result.free}
+                sourceWord={REFINED}
+                marks={refinedValueMarks(refined.result)}
               />
             </div>
           ) : null}

@@ -26,11 +26,14 @@ export function ParamsTable({
   params,
   identified,
   sourceWord = "from the records",
+  marks,
 }: {
   params: MaterialParams;
   /** When given, a column says which values came from the records (or were free). */
   identified?: (keyof MaterialParams)[];
   sourceWord?: string;
+  /** Words that replace the source word for some values (refinement: tied, not informed). */
+  marks?: Partial<Record<keyof MaterialParams, string>>;
 }) {
   return (
     <table className="text-sm" data-testid="params-table">
@@ -46,7 +49,7 @@ export function ParamsTable({
             <td className="py-1 pr-4 text-ink-soft">{unit}</td>
             {identified ? (
               <td className="py-1 text-xs text-ink-faint">
-                {identified.includes(key) ? sourceWord : "starting value"}
+                {marks?.[key] ?? (identified.includes(key) ? sourceWord : "starting value")}
               </td>
             ) : null}
           </tr>

@@ -155,8 +155,11 @@ export function RefinePanel({
               {names[r.id] ?? r.id}: RMS {r.rms.toPrecision(3)} MPa over {r.points} points
             </p>
           ))}
-          {result.skipped.map((id) => (
-            <p key={id}>{names[id] ?? id}: this test type cannot be replayed; left out.</p>
+          {/* records used and left out by name, the isotropy tie, the values kept */}
+          {result.notes.map((note) => (
+            <p key={note} className="text-ink-soft">
+              {note}
+            </p>
           ))}
           {result.inseparable.map((s) => (
             <p key={s.params.join()} className="text-amber-900">

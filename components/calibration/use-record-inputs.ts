@@ -11,7 +11,7 @@ export async function loadRecordInputs(slug: string, ids: string[]): Promise<Tes
       const res = await fetch(`/api/v1/teams/${slug}/test-records/${id}`);
       const json = await res.json();
       if (!res.ok) throw new Error(json?.error?.message ?? "A test record could not be loaded.");
-      return toTestRecordInput(json as TestRecordResponse);
+      return toTestRecordInput(json as TestRecordResponse); // with its name, for the notes
     }),
   );
 }

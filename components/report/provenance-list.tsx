@@ -14,6 +14,13 @@ export function ProvenanceList({ items }: { items: SetProvenance[] }) {
           {p.method ? `, method ${p.method}` : ""}
           {p.fittedAt ? `, fitted ${p.fittedAt.slice(0, 10)}` : ""}
           {p.note ? `. ${p.note}` : ""}
+          {p.warnings.length > 0 ? (
+            <ul className="mt-1 list-disc pl-5 text-xs text-amber-900">
+              {p.warnings.map((w) => (
+                <li key={w}>{w}</li>
+              ))}
+            </ul>
+          ) : null}
           {p.records.length > 0 ? (
             <table className="mt-1 w-full text-xs">
               <thead className="text-left text-ink-faint">

@@ -15,7 +15,7 @@ import { canReplay } from "./replay";
 import { checkParams } from "@/lib/mechanics/validate";
 import { shearWeightByReplay, shearWeightClosedForm } from "./shear-weight";
 import { findTurningPoints } from "./turning-points";
-import type { LoopRow, TestRecordInput, Warning } from "./types";
+import { recordName, type LoopRow, type TestRecordInput, type Warning } from "./types";
 import { compressionModulus, validateByReplay, type ReplayValidation } from "./validation";
 import { initialModulus } from "./initial-modulus";
 
@@ -73,7 +73,7 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
       set(keys.a, axis.threshold.a);
       set(keys.Y0, axis.threshold.Y0);
       set(keys.frozen, axis.frozen?.alpha);
-      notes.push(`${keys.E} from ${axis.E0.source} of record ${record.id}`);
+      notes.push(`${keys.E} from ${axis.E0.source} of record ${recordName(record)}`);
       if (type === "tension-1" && axis.loops.length > 0) {
         set("nu12", poissonFromRamp(axis.clean, axis.loops[0].peakIndex));
         const failure = failureDamage(
@@ -86,7 +86,7 @@ export function identify(records: TestRecordInput[], options: IdentifyOptions): 
         if (failure && failure.dcrit < p.dmax) {
           set("dcrit", failure.dcrit);
           notes.push(
-            `dcrit from the ${failure.source} of record ${record.id}${failure.source === "last loop" ? " (a lower bound: no rupture recorded)" : ""}`,
+            `dcrit from the ${failure.source} of record ${recordName(record)}${failure.source === "last loop" ? " (a lower bound: no rupture recorded)" : ""}`,
           );
         }
       }

@@ -11,6 +11,7 @@ import { cleanRecord } from "./clean";
 import { decimationIndices } from "./decimate";
 import { inseparableParams, type Inseparable } from "./identifiability";
 import { assertRefineBounds } from "./refine-bounds-check";
+import { applyIsotropicTies, planRefinement, refineNotes } from "./refine-plan";
 import { paramVector, type Bounds, type FittableParam } from "./refine-params";
 import { canReplay, replayRecord } from "./replay";
 import type { RecordPoints, TestRecordInput } from "./types";
@@ -28,6 +29,8 @@ export interface RefineOptions {
   shouldCancel?: () => boolean;
   maxRounds?: number; // rounds of 3 Levenberg–Marquardt iterations
   maxPointsPerRecord?: number; // samples replayed inside the loop
+  /** In-plane isotropy kept through the fit; default: the start set is isotropic (refine-plan). */
+  isotropic?: boolean;
 }
 
 export interface RecordResidual {
@@ -44,6 +47,11 @@ export interface RefineResult {
   rounds: number;
   evaluations: number;
   cancelled: boolean;
+  isotropic: boolean; // axis 2 and G12 followed axis 1 throughout
+  free: FittableParam[]; // what the least squares moved
+  tied: FittableParam[]; // recomputed from axis 1 (isotropic sets)
+  notInformed: FittableParam[]; // asked free, but these records cannot inform them: kept
+  notes: string[]; // records used (by name), ties, values kept
 }
 
 class Cancelled extends Error {}
@@ -81,9 +89,14 @@ export function refine(
 ): RefineResult {
   assertRefineBounds(start, options.free, options.bounds); // before any replay
   const usable = records.filter((r) => canReplay(r.testType));
-  const skipped = records.filter((r) => !canReplay(r.testType)).map((r) => r.id);
+  const left = records.filter((r) => !canReplay(r.testType));
+  const skipped = left.map((r) => r.id);
+  const plan = planRefinement(usable, start, options.free, options.isotropic);
+  const tie = plan.isotropic ? applyIsotropicTies : (p: MaterialParams) => p;
   const { sets, y } = prepare(usable, options.maxPointsPerRecord ?? 500);
-  const vector = paramVector(start, options.free, options.bounds);
+  const base = tie(start);
+  const plain = paramVector(base, plan.free, options.bounds);
+  const vector = { ...plain, toParams: (u: ArrayLike<number>) => tie(plain.toParams(u)) };
   let evaluations = 0;
 
   // One replay of every record per parameter vector; the library then asks point by point.
@@ -119,7 +132,7 @@ export function refine(
   let rounds = 0;
   let cancelled = false;
   try {
-    const maxRounds = options.maxRounds ?? 12;
+    const maxRounds = plan.free.length === 0 ? 0 : (options.maxRounds ?? 12);
     while (rounds < maxRounds) {
       rounds++;
       const fit = levenbergMarquardt(
@@ -156,10 +169,15 @@ export function refine(
     params,
     residuals: usable.map((record) => fullResidual(params, record)),
     skipped,
-    inseparable: cancelled ? [] : inseparableParams(jacobian(model, u, y.length), vector.names),
+    inseparable:
+      cancelled || u.length === 0
+        ? []
+        : inseparableParams(jacobian(model, u, y.length), vector.names),
     rounds,
     evaluations,
     cancelled,
+    ...plan,
+    notes: refineNotes(usable, left, plan),
   };
 }
 

@@ -12,6 +12,8 @@ export interface RecordPoints {
 
 export interface TestRecordInput {
   id: string;
+  /** What people call the record; notes use it (the id only when no name is given). */
+  name?: string;
   testType: TestType;
   points: RecordPoints;
   /** Loop detection works on strain unless the test was load-controlled (spec E.2). */
@@ -50,3 +52,7 @@ export type Warning =
   | "clearly positive intercept: creep/viscoelastic residual strain not modelled"
   | "envelope check failed: a·sqrt(Y0) must be below 1"
   | (string & {});
+
+/** The record as notes name it. */
+export const recordName = (record: Pick<TestRecordInput, "id" | "name">): string =>
+  record.name ?? record.id;

@@ -25,6 +25,6 @@ export async function loadRecordsForFit(
   return unique.map((id) => {
     const row = byId.get(id);
     if (!row) throw notFound("test-record");
-    return { id, name: row.name, input: toTestRecordInput(row) };
+    return { id, name: row.name, input: toTestRecordInput(row) }; // the input carries the name for notes
   });
 }

@@ -4,6 +4,8 @@ import type { Db } from "@/db/client";
 import { insertFit } from "@/db/queries/fits";
 import type { RecordReport } from "@/lib/calibration/identify";
 import type { RecordResidual } from "@/lib/calibration/refine";
+import { planRefinement, refineWarnings } from "@/lib/calibration/refine-plan";
+import { canReplay } from "@/lib/calibration/replay";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { can } from "@/lib/shared/permissions";
@@ -42,13 +44,25 @@ function compute(records: LoadedRecord[], data: ReturnType<typeof saveFitSchema.
     };
   }
   const params = toMaterialParams(data.params as ParameterSet);
+  // The plan is made again from the stored records, so the warnings are not the browser's claim.
+  const inputs = records.map((r) => r.input);
+  const used = inputs.filter((r) => canReplay(r.testType));
+  const plan = planRefinement(used, params, data.free);
   return {
     params,
     reports: [],
     residuals: replayResiduals(params, records),
-    warnings: [],
-    options: { free: data.free, bounds: data.bounds ?? {} },
-    method: `Levenberg–Marquardt refinement of ${data.free.join(", ") || "no free parameters"}`,
+    warnings: refineWarnings(
+      inputs.filter((r) => !canReplay(r.testType)),
+      plan,
+    ),
+    options: {
+      free: data.free,
+      bounds: data.bounds ?? {},
+      isotropic: plan.isotropic,
+      notInformed: plan.notInformed,
+    },
+    method: `Levenberg–Marquardt refinement of ${plan.free.join(", ") || "no free parameters"}`,
   };
 }
 

@@ -38,6 +38,8 @@ export function toCurvePoints(
 
 export interface StoredRecordForFit {
   id: string;
+  name?: string; // what the fit's notes call the record
+
   testType: string;
   orientation: number;
   points: StoredPoints;
@@ -48,6 +50,7 @@ export function toTestRecordInput(row: StoredRecordForFit): TestRecordInput {
   const curve = toCurvePoints(row.points) as CurvePoints;
   return {
     id: row.id,
+    ...(row.name ? { name: row.name } : {}),
     testType,
     points: recordPointsFor(testType, curve),
     orientation: row.orientation || undefined,

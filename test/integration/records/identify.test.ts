@@ -81,6 +81,21 @@ describe("identification on a 2,000-point record through the service", () => {
       free: ["E1"],
     });
     expect(first.residuals[0].rms).toBeGreaterThan(0);
+    // Issue 14: the plan is made again on the server from the stored 0° tension record.
+    const { fit } = await getFit(db, t.members.viewer, t.slug, first.id);
+    expect(fit.warnings).toEqual([]); // E1 ≠ E2: no tie; E1 is informed
+    const kept = await saveFit(db, t.members.owner, t.slug, {
+      method: "refine",
+      recordIds: [recordId],
+      name: unique("Refined k6"),
+      params: { ...DEMO_PARAMS, label: "x" }, // in-plane isotropic (spec A.3)
+      free: ["E1", "E2", "k6"],
+    });
+    const keptFit = (await getFit(db, t.members.viewer, t.slug, kept.id)).fit;
+    expect(keptFit.warnings).toContainEqual(expect.stringContaining("in-plane isotropic"));
+    expect(keptFit.warnings).toContainEqual(
+      expect.stringMatching(/^not informed by these records, kept at the start value: k6/),
+    );
     const again = await saveFit(db, t.members.owner, t.slug, {
       method: "refine",
       recordIds: [recordId],

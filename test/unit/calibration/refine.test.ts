@@ -63,25 +63,43 @@ describe("refine", () => {
     expect(Number.isFinite(result.params.E1)).toBe(true);
   });
 
-  it("names a parameter the records do not depend on", () => {
-    const result = refine(records.slice(0, 1), DEMO_PARAMS, { free: ["a1", "E2"], maxRounds: 1 });
-    expect(result.rounds).toBe(1);
-    expect(result.inseparable).toContainEqual({
-      params: ["E2"],
-      reason: "the chosen records do not depend on it",
+  it("keeps a parameter the records do not depend on and names it, instead of refining it", () => {
+    // 0° tension alone: E2 never enters the replayed σ11 (refine-plan.ts, spec B.3/B.4)
+    const result = refine(records.slice(0, 1), DEMO_PARAMS, {
+      free: ["a1", "E2"],
+      isotropic: false,
+      maxRounds: 1,
     });
+    expect(result.rounds).toBe(1);
+    expect(result.free).toEqual(["a1"]);
+    expect(result.notInformed).toEqual(["E2"]);
+    expect(result.params.E2).toBe(DEMO_PARAMS.E2);
+    expect(result.inseparable.some((x) => x.params.includes("E2"))).toBe(false);
+  });
+
+  it("refines E2 through E1 when the set is in-plane isotropic", () => {
+    const result = refine(records.slice(0, 1), DEMO_PARAMS, { free: ["a1", "E2"], maxRounds: 1 });
+    expect(result.free).toEqual(["E1", "a1"]);
+    expect(result.notInformed).toEqual([]);
+    expect(result.params.E2).toBe(result.params.E1);
   });
 
   it("skips record types that cannot be replayed and says which", () => {
     const result = refine(
       [
         ...records.slice(0, 1),
-        { id: "td", testType: "transverse-after-damage-1", points: records[0].points },
+        {
+          id: "td",
+          name: "coupon T after damage",
+          testType: "transverse-after-damage-1",
+          points: records[0].points,
+        },
       ],
       DEMO_PARAMS,
       { free: ["a1"], maxRounds: 1 },
     );
     expect(result.skipped).toEqual(["td"]);
+    expect(result.notes).toContainEqual(expect.stringContaining("coupon T after damage"));
   });
 });
 

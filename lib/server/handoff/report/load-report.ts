@@ -46,7 +46,7 @@ export async function loadCalibrationReport(
   const provenance = matchProvenance(
     file.parameterSets,
     library as unknown as LibrarySet[],
-    fits.map((f) => ({ ...f, residuals: f.residuals ?? [] })),
+    fits.map((f) => ({ ...f, residuals: f.residuals ?? [], warnings: f.warnings ?? [] })),
     new Map(records.map((r) => [r.id, r.name])),
   );
   // A path may hold up to 1,000,000 increments: each set's run has the API's time budget, and a

@@ -19,6 +19,8 @@ export interface FitSummary {
   method: string;
   recordIds: string[];
   residuals: { id: string; rms: number; points: number }[];
+  /** Stored with the fit (issue 14: isotropy tie, values not informed by these records). */
+  warnings?: string[];
   createdAt: string;
 }
 
@@ -30,6 +32,7 @@ export interface SetProvenance {
   note: string | null;
   records: { name: string; rms: number | null; points: number | null }[];
   fittedAt: string | null;
+  warnings: string[];
 }
 
 const NUMERIC = [
@@ -79,6 +82,7 @@ export function matchProvenance(
         };
       }),
       fittedAt: fit?.createdAt ?? null,
+      warnings: fit?.warnings ?? [],
     };
   });
 }

@@ -36,6 +36,15 @@ describe("stored points", () => {
     });
     expect(Array.from(tension.points.stress)).toEqual([0, 11, 21]);
     expect(tension.orientation).toBe(30);
+    expect(tension.name).toBeUndefined();
+    const named = toTestRecordInput({
+      id: "r",
+      name: "coupon B",
+      testType: "tension-1",
+      orientation: 0,
+      points: stored,
+    });
+    expect(named.name).toBe("coupon B"); // the fit's notes name records by it
   });
 
   it("thins a long curve to at most the asked number of points", () => {

@@ -41,6 +41,7 @@ describe("report provenance", () => {
       method: "refine",
       recordIds: ["r1", "r2"],
       residuals: [{ id: "r1", rms: 1.25, points: 400 }],
+      warnings: ["not informed by these records, kept at the start value: k6"],
       createdAt: "2026-11-30T10:00:00Z",
     },
   ];
@@ -57,6 +58,7 @@ describe("report provenance", () => {
       kind: "fitted",
       method: "refine",
       fittedAt: "2026-11-30T10:00:00Z",
+      warnings: ["not informed by these records, kept at the start value: k6"], // issue 14
     });
     expect(p.records).toEqual([
       { name: "Tension 0°", rms: 1.25, points: 400 },
