@@ -4,6 +4,7 @@ import { useVirtualizer } from "@tanstack/react-virtual";
 import { useRef, useState } from "react";
 import { useDrawVersion } from "@/components/charts/use-draw-version";
 import { RESULT_COLUMNS } from "@/lib/mechanics/types";
+import { EXPORT_HEADINGS } from "@/lib/client/loading-desk/export-columns";
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import { rowsToTsv } from "@/lib/client/loading-desk/selection-text";
 import type { SetEntry } from "@/lib/client/loading-desk/set-list";
@@ -110,10 +111,11 @@ export function ResultsTable({ store, entries }: ResultsTableProps) {
               <div
                 key={c}
                 role="columnheader"
+                title={`column ${c} of the results file`}
                 className="shrink-0 px-1 py-1 text-right font-semibold"
                 style={{ width: COL_W }}
               >
-                {c}
+                {EXPORT_HEADINGS[c]}
               </div>
             ))}
           </div>

@@ -1,10 +1,21 @@
-import { PARAMETER_FIELDS, type ParameterField, unitOf } from "@/lib/scenario/parameter-fields";
+import {
+  choiceText,
+  PARAMETER_FIELDS,
+  type ParameterField,
+  unitOf,
+} from "@/lib/scenario/parameter-fields";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
 // A unit that depends on the growth law (the slopes) is written once per law the sets use.
 function unitForSets(field: ParameterField, sets: ParameterSet[]): string {
   const units = [...new Set(sets.map((s) => unitOf(field, s.law)))];
   return units.join(" / ");
+}
+
+/** A value as the table prints it: a choice in words with the file's word, a blank as "—". */
+function shown(field: ParameterField, value: unknown): string {
+  if (value === null || value === undefined) return "—";
+  return field.kind === "choice" ? choiceText(field, String(value)) : String(value);
 }
 
 /** Every parameter of every set with its unit: the table the simulation team types in. */
@@ -32,7 +43,7 @@ export function ParameterTable({ sets }: { sets: ParameterSet[] }) {
             <td>{unitForSets(f, sets)}</td>
             {sets.map((s) => (
               <td key={s.id} className="text-right font-mono">
-                {String((s as unknown as Record<string, unknown>)[f.symbol] ?? "—")}
+                {shown(f, (s as unknown as Record<string, unknown>)[f.symbol])}
               </td>
             ))}
           </tr>
