@@ -125,7 +125,10 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                   </label>
                   {readOnly ? (
                     // Read-only: the value as text (same id, so the label still names it).
-                    <output id={id} className="mt-0.5 block w-full px-2 py-1 font-mono text-sm">
+                    <output
+                      id={id}
+                      className={`mt-0.5 block w-full px-2 py-1 text-sm ${f.kind === "choice" ? "" : "font-mono"}`}
+                    >
                       {shownValue(f, set[name])}
                     </output>
                   ) : f.kind === "choice" ? (
