@@ -4,6 +4,11 @@ import { imageStamp, STAMP_TOP, stampedLayout } from "@/lib/client/loading-desk/
 
 const date = new Date("2026-12-04T09:30:00Z");
 
+/** The stamp of an unsaved "Damage" chart with no sets drawn. */
+function unsavedStamp(scenarioName: string) {
+  return imageStamp({ chartTitle: "Damage", scenarioName, revision: null, sets: [], date });
+}
+
 describe("the stamp on a saved chart image (issue 15)", () => {
   it("names the chart, scenario, revision, sets drawn, date and the caution", () => {
     const stamp = imageStamp({
@@ -23,25 +28,13 @@ describe("the stamp on a saved chart image (issue 15)", () => {
   });
 
   it("says when the work is not saved", () => {
-    const stamp = imageStamp({
-      chartTitle: "Damage",
-      scenarioName: "x",
-      revision: null,
-      sets: [],
-      date,
-    });
+    const stamp = unsavedStamp("x");
     expect(stamp.title).toBe("Damage · x (not saved)");
     expect(stamp.footer.startsWith("Sets: none")).toBe(true);
   });
 
   it("makes room above the plot and keeps the drawn layout, with typed names as plain text", () => {
-    const stamp = imageStamp({
-      chartTitle: "Damage",
-      scenarioName: "<b>rib</b> & co",
-      revision: null,
-      sets: [],
-      date,
-    });
+    const stamp = unsavedStamp("<b>rib</b> & co");
     const drawn = { margin: { l: 56, r: 12, t: 8, b: 40 }, showlegend: true };
     const out = stampedLayout(drawn, stamp) as {
       margin: Record<string, number>;

@@ -22,6 +22,19 @@ const store = {
   version: () => 0,
 } as unknown as ResultsStore;
 
+function renderSetList(readOnly: boolean) {
+  render(
+    <SetListPanel
+      entries={entries}
+      activeId="A"
+      readOnly={readOnly}
+      store={store}
+      onSelect={vi.fn()}
+      dispatch={vi.fn()}
+    />,
+  );
+}
+
 describe("read-only loading desk (issue 13 item 5)", () => {
   it("names who may edit", () => {
     render(<ReadOnlyBanner teamName="Demo team" />);
@@ -31,31 +44,14 @@ describe("read-only loading desk (issue 13 item 5)", () => {
   });
 
   it("shows no Editing chip and no set actions when read-only", () => {
-    render(
-      <SetListPanel
-        entries={entries}
-        activeId="A"
-        readOnly
-        store={store}
-        onSelect={vi.fn()}
-        dispatch={vi.fn()}
-      />,
-    );
+    renderSetList(true);
     expect(screen.queryByText("Editing")).toBeNull();
     expect(screen.getByRole("button", { name: "Shown" })).toBeTruthy();
     expect(screen.queryByRole("button", { name: "Duplicate" })).toBeNull();
   });
 
   it("keeps the Editing chip for editors", () => {
-    render(
-      <SetListPanel
-        entries={entries}
-        activeId="A"
-        store={store}
-        onSelect={vi.fn()}
-        dispatch={vi.fn()}
-      />,
-    );
+    renderSetList(false);
     expect(screen.getByRole("button", { name: "Editing" })).toBeTruthy();
   });
 
@@ -66,16 +62,7 @@ describe("read-only loading desk (issue 13 item 5)", () => {
     // the label still names the value it stands beside
     expect(screen.getByLabelText(/E1/).textContent).toBe(String(set.E1));
     expect(screen.getByLabelText(/Xc/).textContent).toBe(set.Xc === null ? "off" : String(set.Xc));
-    render(
-      <SetListPanel
-        entries={entries}
-        activeId="A"
-        readOnly
-        store={store}
-        onSelect={vi.fn()}
-        dispatch={vi.fn()}
-      />,
-    );
+    renderSetList(true);
     expect(screen.queryByRole("textbox", { name: "Name of set A" })).toBeNull();
     expect(screen.getByText(set.label)).toBeTruthy();
   });
