@@ -13,10 +13,16 @@ export interface ApiErrorBody {
   error: { code: string; message: string; path?: string; [detail: string]: unknown };
 }
 
+// One status per code, whichever route answers. A well-formed request the server cannot carry
+// out (a scenario file or CSV that does not validate, a run over its time budget) is 422, as the
+// public API's document says; other bad input is 400.
 const STATUS_BY_PREFIX: [string, number][] = [
   ["unauthenticated", 401],
   ["unverified", 403],
   ["invalid:too-large", 413],
+  ["invalid:file", 422],
+  ["invalid:csv", 422],
+  ["invalid:time-budget", 422],
   ["invalid:", 400],
   ["forbidden:", 403],
   ["not-found:", 404],

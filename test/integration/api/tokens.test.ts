@@ -8,7 +8,7 @@ import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/rev
 import { apiTokens } from "@/db/schema/api-tokens";
 import { rateLimitBuckets } from "@/db/schema/rate-limits";
 import { memberships } from "@/db/schema/teams";
-import { API_RATE_LIMIT } from "@/lib/server/http/token-route";
+import { API_RATE_LIMIT } from "@/lib/server/http/route";
 import { listApiTokens, revokeApiToken } from "@/lib/server/accounts/api-tokens/manage";
 import { createScenario } from "@/lib/server/workspace/scenarios";
 

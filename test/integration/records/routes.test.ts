@@ -113,10 +113,10 @@ describe("another team's ids are not found", () => {
     );
   });
 
-  it("a malformed upload answers 400 with the line and cell and no stack", async () => {
+  it("a malformed upload answers 422 (as every route does for invalid:csv) with the line and cell and no stack", async () => {
     const bad = uploadBody("strain,stress\n0.001,10\n0.002,x\n");
     const res = await call("editor", recordsRoute.POST, "POST", {}, bad);
-    expect(res.status).toBe(400);
+    expect(res.status).toBe(422);
     expect(res.body.error).toMatchObject({ code: "invalid:csv", line: 3, column: "stress" });
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);
   });

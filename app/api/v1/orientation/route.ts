@@ -1,5 +1,5 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { AppError } from "@/lib/shared/errors";
 import { computeOrientation } from "@/lib/server/handoff/orientation/compute";
 

@@ -1,5 +1,5 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { AppError } from "@/lib/shared/errors";
 import { readRunRequest } from "@/lib/server/handoff/runs/run-request";
 import { runInPool } from "@/lib/server/compute/run-stream";

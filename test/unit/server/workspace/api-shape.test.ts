@@ -15,7 +15,10 @@ describe("HTTP status of each error code", () => {
   it.each([
     ["unauthenticated", 401],
     ["unverified", 403],
-    ["invalid:file", 400],
+    ["invalid:file", 422],
+    ["invalid:csv", 422],
+    ["invalid:time-budget", 422],
+    ["invalid:name", 400],
     ["invalid:too-large", 413],
     ["forbidden:team", 403],
     ["not-found:scenario", 404],

@@ -1,7 +1,6 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
 import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
-import { tokenRoute } from "@/lib/server/http/token-route";
-import { apiRoute, Created } from "@/lib/server/http/route";
+import { Created, apiRoute, tokenRoute } from "@/lib/server/http/route";
 import { createScenario, listScenarios } from "@/lib/server/workspace/scenarios";
 
 type Params = { team: string };

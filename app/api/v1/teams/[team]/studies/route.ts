@@ -1,6 +1,5 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
-import { Created } from "@/lib/server/http/route";
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { Created, tokenRoute } from "@/lib/server/http/route";
 import { getStudyQueue } from "@/lib/server/handoff/studies/app-queue";
 import { submitStudy } from "@/lib/server/handoff/studies/service";
 

@@ -1,7 +1,6 @@
 import { BODY_LIMITS, readJsonBody } from "@/lib/server/http/body";
 import { checkApiCapsOfSavedFile } from "@/lib/server/api-caps";
-import { tokenRoute } from "@/lib/server/http/token-route";
-import { apiRoute, Created } from "@/lib/server/http/route";
+import { Created, apiRoute, tokenRoute } from "@/lib/server/http/route";
 import { listRevisions, saveRevision } from "@/lib/server/workspace/revisions";
 
 type Params = { team: string; scenario: string };

@@ -1,4 +1,4 @@
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { studyResultsZip } from "@/lib/server/handoff/studies/service";
 
 type Params = { team: string; study: string };

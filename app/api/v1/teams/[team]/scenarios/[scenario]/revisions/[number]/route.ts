@@ -1,4 +1,4 @@
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { getRevision } from "@/lib/server/workspace/revisions";
 
 type Params = { team: string; scenario: string; number: string };

@@ -1,4 +1,4 @@
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { referenceBundle } from "@/lib/server/handoff/bundle/service";
 
 type Params = { team: string; scenario: string; number: string };

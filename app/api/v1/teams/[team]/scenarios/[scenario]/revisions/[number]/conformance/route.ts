@@ -1,6 +1,5 @@
 import { readJsonBody } from "@/lib/server/http/body";
-import { Created } from "@/lib/server/http/route";
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { Created, tokenRoute } from "@/lib/server/http/route";
 import {
   createConformanceCheck,
   listConformanceChecks,

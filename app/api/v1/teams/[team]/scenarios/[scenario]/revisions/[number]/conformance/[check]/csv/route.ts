@@ -1,4 +1,4 @@
-import { tokenRoute } from "@/lib/server/http/token-route";
+import { tokenRoute } from "@/lib/server/http/route";
 import { loadConformanceCheck } from "@/lib/server/handoff/conformance/service";
 
 type Params = { team: string; scenario: string; number: string; check: string };
