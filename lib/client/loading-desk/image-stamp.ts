@@ -3,6 +3,9 @@
  * e-mail), so it carries its chart, scenario, revision, the sets drawn, the date and the caution,
  * drawn into the picture rather than kept beside it.
  */
+// Plotly titles take a little markup; names typed by people must not add any.
+import { escapeMarkup } from "@/lib/shared/escape-markup";
+
 export interface ImageStampInput {
   chartTitle: string;
   scenarioName: string;
@@ -29,11 +32,6 @@ export function imageStamp(input: ImageStampInput): ImageStamp {
 
 /** Extra room (px) the two stamp lines need above the plot in the saved image. */
 export const STAMP_TOP = 52;
-
-/** Plotly titles take a little markup; names typed by people must not add any. */
-function escapeMarkup(text: string): string {
-  return text.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;");
-}
 
 /**
  * The layout of the saved image: the drawn layout with the stamp as a two-line title (the second

@@ -1,15 +1,8 @@
 import "server-only";
 
-// Plain HTML that survives any mail client: one column, inline styles, our palette.
+import { escapeMarkup as escapeHtml } from "@/lib/shared/escape-markup";
 
-export function escapeHtml(value: string): string {
-  return value
-    .replace(/&/g, "&amp;")
-    .replace(/</g, "&lt;")
-    .replace(/>/g, "&gt;")
-    .replace(/"/g, "&quot;")
-    .replace(/'/g, "&#39;");
-}
+// Plain HTML that survives any mail client: one column, inline styles, our palette.
 
 export function frameHtml(opts: {
   heading: string;

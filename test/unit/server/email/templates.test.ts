@@ -35,7 +35,7 @@ describe("e-mail templates", () => {
     });
     expect(m.html).not.toContain("<script>");
     expect(m.html).toContain("&lt;script&gt;");
-    expect(m.html).toContain("&quot;A&quot; &amp; &lt;b&gt;");
+    expect(m.html).toContain("&#34;A&#34; &amp; &lt;b&gt;");
   });
 
   it("state the invited role and team in the invitation", () => {
