@@ -34,7 +34,7 @@ function metaQuery(db: Executor) {
 
 type MetaRow = Awaited<ReturnType<ReturnType<typeof metaQuery>["execute"]>>[number];
 
-export function toRevisionMeta(row: MetaRow) {
+function toRevisionMeta(row: MetaRow) {
   return {
     id: row.id,
     number: row.number,

@@ -45,7 +45,7 @@ function summaryQuery(db: Executor) {
 type SummaryRow = Awaited<ReturnType<ReturnType<typeof summaryQuery>["execute"]>>[number];
 
 /** One row of the scenarios table (name, material, latest revision, review state, author). */
-export function toScenarioSummary(row: SummaryRow) {
+function toScenarioSummary(row: SummaryRow) {
   return {
     id: row.id,
     name: row.name,

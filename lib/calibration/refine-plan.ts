@@ -18,7 +18,7 @@ import { labelOf } from "@/lib/scenario/parameter-fields";
 import { recordName, type TestRecordInput } from "./types";
 
 /** Follower → leader under in-plane isotropy (G12 follows E1 through E1/(2(1 + nu12))). */
-export const ISOTROPIC_TIES = {
+const ISOTROPIC_TIES = {
   E2: "E1",
   Y0_2: "Y0_1",
   a2: "a1",
@@ -67,7 +67,7 @@ const UNIAXIAL: Partial<Record<TestType, FittableParam[]>> = {
 };
 
 /** The values one record's replayed stress depends on (see the file comment). */
-export function informedByRecord(record: TestRecordInput, p: MaterialParams): FittableParam[] {
+function informedByRecord(record: TestRecordInput, p: MaterialParams): FittableParam[] {
   const alongAxis = p.frame === "fixed" && p.thetaD % 360 === 0 && !record.orientation;
   const narrow = alongAxis ? UNIAXIAL[record.testType] : undefined;
   return narrow ?? [...FITTABLE];

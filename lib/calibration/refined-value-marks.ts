@@ -6,8 +6,8 @@
 import type { FittableParam } from "./refine-params";
 
 export const REFINED = "refined";
-export const TIED_TO_AXIS_1 = "tied to axis 1";
-export const NOT_INFORMED = "not informed by these records";
+const TIED_TO_AXIS_1 = "tied to axis 1";
+const NOT_INFORMED = "not informed by these records";
 
 export interface RefineOutcome {
   free: readonly FittableParam[];

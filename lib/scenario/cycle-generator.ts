@@ -62,11 +62,6 @@ function legOn(component: CycleComponent, control: ControlKind, value: number, n
   return leg;
 }
 
-/** Legs per cycle: 2, or 4 with a reverse half. */
-export function legsPerCycle(generator: CycleGenerator): number {
-  return generator.reverse ? 4 : 2;
-}
-
 /** The legs a cycle generator stands for. */
 export function expandCycles(generator: CycleGenerator): Leg[] {
   const { component, peak, unloadTo, reverse, increments: n } = generator;

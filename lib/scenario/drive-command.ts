@@ -18,9 +18,9 @@ export interface DriveIo {
   stderr(line: string): void;
 }
 
-export const EXIT_OK = 0;
+const EXIT_OK = 0;
 export const EXIT_INTERNAL = 1;
-export const EXIT_BAD_INPUT = 2;
+const EXIT_BAD_INPUT = 2;
 
 function describeReadError(file: string, err: unknown): string {
   const code = (err as { code?: string }).code;
@@ -34,7 +34,7 @@ function describeReadError(file: string, err: unknown): string {
  * JSON.parse sometimes reports a character position (people want a line and column) and
  * sometimes quotes the offending text, newlines included: keep the message on one short line.
  */
-export function describeJsonError(file: string, text: string, err: unknown): string {
+function describeJsonError(file: string, text: string, err: unknown): string {
   const raw = err instanceof Error ? err.message : String(err);
   const message = raw.replace(/\s+/g, " ").slice(0, 160);
   const position = /position (\d+)/.exec(raw);

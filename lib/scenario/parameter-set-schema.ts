@@ -17,7 +17,7 @@ const within = (symbol: string, lo: number, hi: number) =>
   numberIn((x) => x >= lo && x <= hi, rangeOf(symbol));
 
 /** Relative tolerance of the isotropy test for frame "onset" (spec B.8). */
-export const ISOTROPY_TOLERANCE = 1e-6;
+const ISOTROPY_TOLERANCE = 1e-6;
 
 const fieldsSchema = z.strictObject(
   {

@@ -13,7 +13,7 @@ export const MAX_TOTAL_INCREMENTS = 1_000_000;
 
 const controlKind = choice(["strain", "stress"]);
 
-export const legSchema = z.strictObject(
+const legSchema = z.strictObject(
   {
     control: z.tuple([controlKind, controlKind, controlKind], {
       error: 'must be a list of 3 entries, each "strain" or "stress", for (11, 22, 12)',

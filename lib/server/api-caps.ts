@@ -8,7 +8,6 @@ import { MAX_TOTAL_INCREMENTS } from "@/lib/scenario/path-schema";
  * anything is computed. The UI allows 6 parameter sets; the API allows twice that, so a script may
  * compare more candidates, while the report (one run per set) stays bounded.
  */
-export const UI_MAX_PARAMETER_SETS = 6;
 export const API_MAX_PARAMETER_SETS = 12;
 /** Row 0 is the initial state, then one row per increment of the largest path allowed. */
 export const API_MAX_RUN_ROWS = MAX_TOTAL_INCREMENTS + 1;

@@ -11,7 +11,7 @@ import "server-only";
  * machine can send `Host: 127.0.0.1` on purpose. The real protection is that the setting is off by
  * default and that `scripts/start.sh` binds to 127.0.0.1; never enable it on a shared server.
  */
-export function demoMailEnabled(env: Record<string, string | undefined>): boolean {
+function demoMailEnabled(env: Record<string, string | undefined>): boolean {
   return env.CRAQUELURE_DEMO_MAIL === "1";
 }
 

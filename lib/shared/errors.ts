@@ -41,7 +41,7 @@ export type ActionResult<T = void> =
 
 export const MASKED_MESSAGE = "Something went wrong on our side. Please try again in a moment.";
 
-export function toActionError(error: unknown): Extract<ActionResult, { ok: false }> {
+function toActionError(error: unknown): Extract<ActionResult, { ok: false }> {
   if (isAppError(error)) {
     return { ok: false, code: error.code, message: error.message, field: error.field };
   }
@@ -60,7 +60,7 @@ export function toActionError(error: unknown): Extract<ActionResult, { ok: false
 }
 
 /** Next's redirect()/notFound() work by throwing; those must pass through untouched. */
-export function isNextControlFlow(error: unknown): boolean {
+function isNextControlFlow(error: unknown): boolean {
   const digest = (error as { digest?: unknown } | null)?.digest;
   return (
     typeof digest === "string" && /^NEXT_(REDIRECT|NOT_FOUND|HTTP_ERROR_FALLBACK)/.test(digest)

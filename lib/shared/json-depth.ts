@@ -1,5 +1,5 @@
 /** How deep objects and arrays may nest in any JSON we read; real files stay below 10. */
-export const MAX_JSON_DEPTH = 64;
+const MAX_JSON_DEPTH = 64;
 
 export interface TooDeep {
   line: number;

@@ -106,7 +106,7 @@ export function stackStiffness(U: Invariants, layers: Layer[], closure: Closure)
  * Q'(θ) = Tσ Q Tσᵀ with the usual plane-stress transformation (Jones, Mechanics of Composite
  * Materials, 2nd ed., eq. 2.84, written for the rotated frame).
  */
-export function rotateStiffness(q: PlaneStiffness, theta: number): PlaneStiffness {
+function rotateStiffness(q: PlaneStiffness, theta: number): PlaneStiffness {
   const t = (theta * Math.PI) / 180;
   const c = Math.cos(t);
   const s = Math.sin(t);
@@ -154,7 +154,7 @@ export function modulusAlong(q: PlaneStiffness, theta: number): number {
  * 2θ part of the average stiffness); when that tensor is isotropic (a balanced stack), the
  * direction of the 4θ part that is stiffest along axis 1; else the x axis.
  */
-export function stackFrame(q: PlaneStiffness, layers: Layer[]): number {
+function stackFrame(q: PlaneStiffness, layers: Layer[]): number {
   const total = layers.reduce((acc, l) => acc + l.fraction, 0);
   const mean = layers.reduce(
     (acc, l) => ({
@@ -174,7 +174,7 @@ export function stackFrame(q: PlaneStiffness, layers: Layer[]): number {
 }
 
 /** Engineering constants in the frame at thetaD: E_i = 1/S_ii, nu12 = −S12/S11, G12 = 1/S66. */
-export function engineeringConstants(q: PlaneStiffness, thetaD: number): OrientedElastic {
+function engineeringConstants(q: PlaneStiffness, thetaD: number): OrientedElastic {
   const S = compliance(rotateStiffness(q, thetaD));
   return { E1: 1 / S.S11, E2: 1 / S.S22, nu12: -S.S12 / S.S11, G12: 1 / S.S66, thetaD };
 }

@@ -45,12 +45,12 @@ export interface OrientationResult {
   couponThetaD: number | null;
 }
 
-export function plyOf(input: OrientationInput["ply"]): AlignedPly {
+function plyOf(input: OrientationInput["ply"]): AlignedPly {
   return "constituents" in input ? alignedPly(input.constituents) : input;
 }
 
 /** Wraps an angle in degrees into (−90, 90]: a frame and its half turn are the same frame. */
-export function wrapFrame(theta: number): number {
+function wrapFrame(theta: number): number {
   const t = theta - 180 * Math.round(theta / 180);
   return t === -90 ? 90 : t;
 }

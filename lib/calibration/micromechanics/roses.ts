@@ -18,7 +18,7 @@ export interface PolarPoint {
   r: number;
 }
 
-export function stiffnessRose(q: PlaneStiffness, n = 181): PolarPoint[] {
+function stiffnessRose(q: PlaneStiffness, n = 181): PolarPoint[] {
   return Array.from({ length: n }, (_, k) => {
     const theta = (360 * k) / (n - 1);
     return { theta, r: modulusAlong(q, theta) };

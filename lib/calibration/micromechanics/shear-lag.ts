@@ -10,7 +10,7 @@ import { isotropicShear, type Constituents } from "./halpin-tsai";
 export const ETA_O_PLANAR = 3 / 8;
 
 /** ln(R/r) for hexagonal packing: ½·ln(pi/(2·sqrt(3)·Vf)). */
-export function hexagonalLogRatio(Vf: number): number {
+function hexagonalLogRatio(Vf: number): number {
   return 0.5 * Math.log(Math.PI / (2 * Math.sqrt(3) * Vf));
 }
 

@@ -15,7 +15,7 @@ export const PAGE_SIZE = 20;
 
 const SORTS = ["name", "updated", "review"] as const;
 
-export function defaultDir(sort: ScenarioListState["sort"]): "asc" | "desc" {
+function defaultDir(sort: ScenarioListState["sort"]): "asc" | "desc" {
   return sort === "updated" ? "desc" : "asc";
 }
 

@@ -1,6 +1,6 @@
 import type { CommentNode, PersonRef } from "./types";
 
-export const PENDING_PREFIX = "pending-";
+const PENDING_PREFIX = "pending-";
 
 export interface NewComment {
   body: string;

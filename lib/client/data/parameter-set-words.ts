@@ -3,7 +3,7 @@ import { PARAMETER_FIELDS, unitOf } from "@/lib/scenario/parameter-fields";
 import { formatValue } from "./format";
 
 /** The values a table row shows: stiffness, thresholds and the critical damage. */
-export const KEY_SYMBOLS = ["E1", "E2", "G12", "Y0_1", "Y0_2", "dcrit"] as const;
+const KEY_SYMBOLS = ["E1", "E2", "G12", "Y0_1", "Y0_2", "dcrit"] as const;
 
 export function keyValues(values: Record<string, unknown>): [string, string][] {
   return KEY_SYMBOLS.filter((k) => values[k] !== undefined).map((k) => [k, formatValue(values[k])]);

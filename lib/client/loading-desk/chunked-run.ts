@@ -22,7 +22,7 @@ export interface ChunkTiming {
   now: () => number;
 }
 
-export const DEFAULT_TIMING: ChunkTiming = {
+const DEFAULT_TIMING: ChunkTiming = {
   firstMs: 4,
   everyMs: 40,
   now: () => performance.now(),

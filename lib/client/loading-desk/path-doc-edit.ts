@@ -4,16 +4,11 @@ import type { PathDoc, PathItem } from "@/lib/scenario/path-text/path-doc";
 
 export type LegAt = { item: number; leg: number | null };
 
-export const NEW_LEG: Leg = {
+const NEW_LEG: Leg = {
   control: ["strain", "stress", "stress"],
   target: [0, 0, 0],
   increments: 50,
 };
-
-export function legAt(doc: PathDoc, at: LegAt): Leg {
-  const item = doc.items[at.item];
-  return item.kind === "leg" ? item.leg : item.block.legs[at.leg!];
-}
 
 export function updateLeg(doc: PathDoc, at: LegAt, change: (leg: Leg) => Leg): PathDoc {
   const items = doc.items.map((item, i): PathItem => {

@@ -21,7 +21,7 @@ export type SetAction =
   | { type: "replace"; entries: SetEntry[] };
 
 /** First free id of "A" … "Z". */
-export function nextSetId(entries: readonly SetEntry[]): string {
+function nextSetId(entries: readonly SetEntry[]): string {
   const used = new Set(entries.map((e) => e.set.id));
   for (let c = 65; c <= 90; c++)
     if (!used.has(String.fromCharCode(c))) return String.fromCharCode(c);

@@ -16,7 +16,7 @@ const strain = (index: 0 | 1 | 2): ComponentName => ({ index, control: "strain" 
 const stress = (index: 0 | 1 | 2): ComponentName => ({ index, control: "stress" });
 
 /** What the product writes and the words it accepts for it. */
-export const CURRENT_COMPONENT_NAMES: Readonly<Record<string, ComponentName>> = {
+const CURRENT_COMPONENT_NAMES: Readonly<Record<string, ComponentName>> = {
   ε11: strain(0),
   ε22: strain(1),
   γ12: strain(2),

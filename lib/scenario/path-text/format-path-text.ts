@@ -11,7 +11,7 @@ function num(v: number): string {
   return Object.is(v, -0) ? "0" : String(v);
 }
 
-export function formatLeg(leg: Leg): string {
+function formatLeg(leg: Leg): string {
   const terms: string[] = [];
   for (const i of [0, 1, 2] as const) {
     const free = leg.control[i] === "stress" && leg.target[i] === 0;

@@ -31,7 +31,7 @@ function scaleLeg(leg: Leg, factor: number): Leg {
 }
 
 /** The legs of one repeat block, cycle after cycle. */
-export function expandRepeat(block: RepeatBlock): Leg[] {
+function expandRepeat(block: RepeatBlock): Leg[] {
   const out: Leg[] = [];
   for (let k = 0; k < block.count; k++) {
     for (const leg of block.legs) out.push(scaleLeg(leg, 1 + block.grow * k));
@@ -47,7 +47,7 @@ export function expandPathDoc(doc: PathDoc): Leg[] {
 }
 
 /** Increments of one item once expanded. */
-export function itemIncrements(item: PathItem): number {
+function itemIncrements(item: PathItem): number {
   if (item.kind === "leg") return item.leg.increments;
   return item.block.count * item.block.legs.reduce((s, l) => s + l.increments, 0);
 }

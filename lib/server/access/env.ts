@@ -20,11 +20,6 @@ export function getEnv(): Env {
   return cached;
 }
 
-/** Absolute link for e-mails; APP_URL may or may not end in a slash. */
-export function appLink(path: string): string {
-  return new URL(path, getEnv().APP_URL).toString();
-}
-
 /** Secure cookies follow the public URL, not NODE_ENV: the local http start must still sign in. */
 export function isHttpsApp(): boolean {
   return getEnv().APP_URL.startsWith("https://");

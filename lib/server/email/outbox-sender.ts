@@ -39,7 +39,7 @@ export function startMailOutbox(): void {
   void tick();
 }
 
-export function stopMailOutbox(): void {
+function stopMailOutbox(): void {
   if (state.__craqMailTimer) clearInterval(state.__craqMailTimer);
   state.__craqMailTimer = undefined;
 }

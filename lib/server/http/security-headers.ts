@@ -41,7 +41,7 @@ export function newNonce(): string {
 }
 
 /** Headers every response carries besides the policy itself. */
-export const FIXED_SECURITY_HEADERS: Record<string, string> = {
+const FIXED_SECURITY_HEADERS: Record<string, string> = {
   "x-content-type-options": "nosniff",
   "referrer-policy": "strict-origin-when-cross-origin",
   // For browsers that predate frame-ancestors.

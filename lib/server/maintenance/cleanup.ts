@@ -14,7 +14,7 @@ const DAY_MS = 24 * 60 * 60 * 1000;
  * How long finished rows are kept. Rate-limit windows are at most an hour long, so a day-old
  * window counts for nothing; sent mail is kept a week as a record of delivery.
  */
-export const RETENTION = {
+const RETENTION = {
   rateLimitWindowsDays: 1,
   sentMailDays: 7,
 } as const;

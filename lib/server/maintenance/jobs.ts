@@ -8,7 +8,7 @@ import { cleanUpExpiredRows } from "./cleanup";
 
 export const CLEANUP_QUEUE = "maintenance-cleanup";
 /** Every hour at minute 17 (pg-boss cron, UTC); one instance takes each run. */
-export const CLEANUP_CRON = "17 * * * *";
+const CLEANUP_CRON = "17 * * * *";
 
 /**
  * Schedules the hourly cleanup and works it on this boss. Safe to call from every process:

@@ -27,7 +27,7 @@ export interface CreateShareLinkResponse {
 const DAY_MS = 24 * 60 * 60 * 1000;
 
 /** 128 random bits, URL-safe (22 characters). */
-export function newShareToken(): string {
+function newShareToken(): string {
   return randomBytes(16).toString("base64url");
 }
 

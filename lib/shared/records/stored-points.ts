@@ -22,7 +22,7 @@ export function toStoredPoints(curve: CurvePoints): StoredPoints {
   return stored;
 }
 
-export function toCurvePoints(
+function toCurvePoints(
   stored: StoredPoints,
 ): Omit<CurvePoints, "lines" | "strainUnit" | "stressUnit"> {
   const curve: Omit<CurvePoints, "lines" | "strainUnit" | "stressUnit"> = {

@@ -12,7 +12,7 @@ export const emailSchema = z
   .pipe(z.email("Enter a valid e-mail address, like name@example.com."))
   .transform((value) => value.toLowerCase());
 
-export const newPasswordSchema = z
+const newPasswordSchema = z
   .string()
   .min(MIN_PASSWORD_LENGTH, `Use at least ${MIN_PASSWORD_LENGTH} characters.`)
   .max(MAX_PASSWORD_LENGTH, `Use at most ${MAX_PASSWORD_LENGTH} characters.`);
@@ -49,5 +49,3 @@ export const resetPasswordSchema = z
     path: ["confirm"],
   });
 export type ResetPasswordInput = z.input<typeof resetPasswordSchema>;
-
-export const tokenSchema = z.object({ token: z.string().min(1).max(200) });

@@ -4,7 +4,7 @@ import { ROLES } from "@/lib/shared/permissions";
 
 import { emailSchema } from "./auth";
 
-export const teamNameSchema = z
+const teamNameSchema = z
   .string()
   .trim()
   .min(2, "Use at least 2 characters.")
@@ -21,7 +21,7 @@ export const teamSlugSchema = z
 export const renameTeamSchema = z.object({ teamSlug: teamSlugSchema, name: teamNameSchema });
 export type RenameTeamInput = z.input<typeof renameTeamSchema>;
 
-export const roleSchema = z.enum(ROLES, { error: "Choose one of the listed roles." });
+const roleSchema = z.enum(ROLES, { error: "Choose one of the listed roles." });
 
 export const inviteSchema = z.object({
   teamSlug: teamSlugSchema,

@@ -10,18 +10,18 @@ import { INT4_MAX } from "./int4";
 const shortText = (max: number, what: string) =>
   z.string().trim().max(max, `Keep the ${what} under ${max} characters.`);
 
-export const scenarioNameSchema = shortText(200, "name").min(1, "Give the scenario a name.");
-export const materialLabelSchema = shortText(200, "material label");
-export const messageSchema = shortText(2000, "message");
+const scenarioNameSchema = shortText(200, "name").min(1, "Give the scenario a name.");
+const materialLabelSchema = shortText(200, "material label");
+const messageSchema = shortText(2000, "message");
 
 // Tags are compared as typed after trimming; duplicates collapse.
-export const tagsSchema = z
+const tagsSchema = z
   .array(shortText(40, "tag").min(1, "Tags cannot be empty."), "Tags must be a list of words.")
   .max(20, "Use at most 20 tags.")
   .transform((tags) => [...new Set(tags)]);
 
 export const REVIEW_STATES = reviewState.enumValues;
-export const reviewStateSchema = z.enum(REVIEW_STATES, "Unknown review state.");
+const reviewStateSchema = z.enum(REVIEW_STATES, "Unknown review state.");
 
 export const scenarioListQuerySchema = z.object({
   sort: z

@@ -4,7 +4,7 @@ import { createHash, randomBytes } from "node:crypto";
 
 // A personal API token is "crq_" + 32 random bytes (base64url). Only its SHA-256 is stored; at
 // 256 bits of entropy a plain hash is enough. The prefix makes a leaked token easy to spot.
-export const API_TOKEN_PREFIX = "crq_";
+const API_TOKEN_PREFIX = "crq_";
 const SHAPE = /^crq_[A-Za-z0-9_-]{43}$/;
 
 export function hashApiToken(token: string): string {

@@ -12,7 +12,7 @@ import { createSessionToken, validateSessionToken } from "./session-token";
 
 let instance: AppLucia | undefined;
 
-export function getLucia(): AppLucia {
+function getLucia(): AppLucia {
   instance ??= createLucia(getDb(), { secureCookies: isHttpsApp() });
   return instance;
 }

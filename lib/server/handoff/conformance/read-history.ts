@@ -41,11 +41,11 @@ export const HISTORY_HEADER_ALIASES: Readonly<Record<HistoryChannel, readonly st
 };
 
 /** A header as compared with the aliases: no unit, no case, no spaces, "_" or "-". */
-export function headerKey(header: string): string {
+function headerKey(header: string): string {
   return headerName(header).replace(/[\s_-]+/g, "");
 }
 
-export function suggestHistoryMapping(headers: string[]): HistoryMapping {
+function suggestHistoryMapping(headers: string[]): HistoryMapping {
   const mapping: HistoryMapping = {};
   for (const channel of HISTORY_CHANNELS) {
     const index = headers.findIndex((h) => HISTORY_HEADER_ALIASES[channel].includes(headerKey(h)));

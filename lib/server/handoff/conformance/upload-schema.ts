@@ -28,7 +28,7 @@ export const REQUIRED_CHANNELS: HistoryChannel[] = [
 
 const column = z.int().min(0).max(63);
 
-export const historyMappingSchema = z.strictObject(
+const historyMappingSchema = z.strictObject(
   Object.fromEntries(HISTORY_CHANNELS.map((c) => [c, column.optional()])) as Record<
     HistoryChannel,
     z.ZodOptional<typeof column>

@@ -12,7 +12,7 @@ import type { PathRunner } from "@/lib/scenario/run-scenario-file";
 /** Increments between two looks at the clock: small enough to stop promptly, cheap to check. */
 export const CHUNK_INCREMENTS = 8192;
 
-export const DEFAULT_RUN_BUDGET_MS = 20_000;
+const DEFAULT_RUN_BUDGET_MS = 20_000;
 
 export class TimeBudgetExceeded extends Error {
   /** Passes through the run function (run-scenario-file.ts) instead of reading as a core fault. */
@@ -27,7 +27,7 @@ export class TimeBudgetExceeded extends Error {
 export type Clock = () => number;
 
 /** CPU time of this process in milliseconds (user + system). */
-export const cpuClock: Clock = () => {
+const cpuClock: Clock = () => {
   const { user, system } = process.cpuUsage();
   return (user + system) / 1000;
 };

@@ -11,7 +11,7 @@ import { AppError } from "@/lib/shared/errors";
 import { MAX_TOTAL_INCREMENTS } from "@/lib/scenario/path-schema";
 import { parseWithPath } from "@/lib/server/workspace/parse";
 
-export const runFormatSchema = z.enum(["csv", "json"]);
+const runFormatSchema = z.enum(["csv", "json"]);
 export type RunFormat = z.infer<typeof runFormatSchema>;
 
 const setIdSchema = z.string().min(1).max(100);
@@ -24,7 +24,7 @@ export const runRequestSchema = z.strictObject({
   format: runFormatSchema.optional().describe("csv (default) or json"),
 });
 
-export const runQuerySchema = z.object({
+const runQuerySchema = z.object({
   set: setIdSchema.optional(),
   format: runFormatSchema.optional(),
 });
@@ -62,7 +62,7 @@ export function readRunRequest(
 }
 
 /** Counted before validation so an oversized path answers 413 without building anything. */
-export function checkIncrementLimit(scenario: Record<string, unknown>): void {
+function checkIncrementLimit(scenario: Record<string, unknown>): void {
   const legs = (scenario.path as { legs?: unknown } | undefined)?.legs;
   if (!Array.isArray(legs)) return;
   let total = 0;

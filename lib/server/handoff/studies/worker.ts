@@ -27,7 +27,7 @@ export interface StudyWorkerOptions {
 const reasonOf = (error: unknown) =>
   (error instanceof Error ? error.message : String(error)).slice(0, 500);
 
-export async function processStudyJob(
+async function processStudyJob(
   db: Executor,
   job: PgBoss.JobWithMetadata<StudyJob>,
   runner: PathRunner,
