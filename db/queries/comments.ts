@@ -37,3 +37,20 @@ export async function findCommentRow(db: Executor, revisionId: string, commentId
     .where(and(eq(revisionComments.revisionId, revisionId), eq(revisionComments.id, commentId)));
   return row ?? null;
 }
+
+export type NewComment = typeof revisionComments.$inferInsert;
+
+export async function insertComment(db: Executor, values: NewComment) {
+  const [row] = await db
+    .insert(revisionComments)
+    .values(values)
+    .returning({ id: revisionComments.id });
+  return row;
+}
+
+export async function setCommentBody(db: Executor, commentId: string, body: string, at: Date) {
+  await db
+    .update(revisionComments)
+    .set({ body, editedAt: at })
+    .where(eq(revisionComments.id, commentId));
+}

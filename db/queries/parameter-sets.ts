@@ -47,3 +47,39 @@ export async function findParameterSetView(db: Executor, teamId: string, id: str
   );
   return row ? toView(row) : null;
 }
+
+export type NewParameterSet = typeof parameterSets.$inferInsert;
+
+export async function insertParameterSet(db: Executor, values: NewParameterSet) {
+  const [row] = await db.insert(parameterSets).values(values).returning({ id: parameterSets.id });
+  return row;
+}
+
+export type ParameterSetChanges = Partial<
+  Pick<NewParameterSet, "name" | "values" | "provenance">
+> & { updatedBy: string; updatedAt: Date };
+
+export async function updateParameterSetRow(
+  db: Executor,
+  teamId: string,
+  id: string,
+  changes: ParameterSetChanges,
+) {
+  await db
+    .update(parameterSets)
+    .set(changes)
+    .where(and(eq(parameterSets.teamId, teamId), eq(parameterSets.id, id)));
+}
+
+export async function deleteParameterSetRow(db: Executor, id: string) {
+  await db.delete(parameterSets).where(eq(parameterSets.id, id));
+}
+
+/** The id of the team's set of that name; undefined when there is none. */
+export async function findParameterSetIdByName(db: Executor, teamId: string, name: string) {
+  const [existing] = await db
+    .select({ id: parameterSets.id })
+    .from(parameterSets)
+    .where(and(eq(parameterSets.teamId, teamId), eq(parameterSets.name, name)));
+  return existing;
+}

@@ -66,6 +66,12 @@ export async function findRevisionMeta(db: Executor, scenarioId: string, number:
   return row ? toRevisionMeta(row) : null;
 }
 
+export type NewRevision = typeof scenarioRevisions.$inferInsert;
+
+export async function insertRevision(db: Executor, values: NewRevision) {
+  await db.insert(scenarioRevisions).values(values);
+}
+
 /** The stored row, file included. */
 export async function findRevisionRow(db: Executor, scenarioId: string, number: number) {
   const [row] = await db

@@ -133,3 +133,50 @@ export async function findScenarioRow(
   const [row] = lock ? await query.for("update") : await query;
   return row ?? null;
 }
+
+export type NewScenario = typeof scenarios.$inferInsert;
+
+export async function insertScenario(db: Executor, values: NewScenario) {
+  const [row] = await db.insert(scenarios).values(values).returning({ id: scenarios.id });
+  return row;
+}
+
+/** Name, material label, tags: the fields an edit may change, with the time of the edit. */
+export type ScenarioChanges = Partial<Pick<NewScenario, "name" | "materialLabel" | "tags">> & {
+  updatedAt: Date;
+};
+
+export async function updateScenarioRow(
+  db: Executor,
+  scenarioId: string,
+  changes: ScenarioChanges,
+) {
+  await db.update(scenarios).set(changes).where(eq(scenarios.id, scenarioId));
+}
+
+/** A new revision became the latest: its review starts as a draft again. */
+export async function setLatestRevision(
+  db: Executor,
+  scenarioId: string,
+  number: number,
+  at: Date,
+) {
+  await db
+    .update(scenarios)
+    .set({ latestRevision: number, latestReviewState: "draft", updatedAt: at })
+    .where(eq(scenarios.id, scenarioId));
+}
+
+/** Revisions, comments, review history and share links go with it (foreign keys cascade). */
+export async function deleteScenarioRow(db: Executor, scenarioId: string) {
+  await db.delete(scenarios).where(eq(scenarios.id, scenarioId));
+}
+
+/** The id of the team's scenario of that name (names need not be unique: any one of them). */
+export async function findScenarioIdByName(db: Executor, teamId: string, name: string) {
+  const [scenario] = await db
+    .select({ id: scenarios.id })
+    .from(scenarios)
+    .where(and(eq(scenarios.teamId, teamId), eq(scenarios.name, name)));
+  return scenario;
+}

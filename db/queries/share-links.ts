@@ -1,6 +1,7 @@
-import { and, desc, eq, sql } from "drizzle-orm";
+import { and, desc, eq, isNull, sql } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
+import { rateLimitBuckets } from "@/db/schema/rate-limits";
 import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { shareLinks } from "@/db/schema/share-links";
 import { teams } from "@/db/schema/teams";
@@ -83,4 +84,43 @@ export async function viewLiveShareLink(db: Executor, tokenHash: string, now: Da
       .where(eq(scenarioRevisions.id, link.revisionId));
     return row ? { ...row, expiresAt: link.expiresAt } : null;
   });
+}
+
+export type NewShareLink = typeof shareLinks.$inferInsert;
+
+export async function insertShareLink(db: Executor, values: NewShareLink) {
+  const [row] = await db.insert(shareLinks).values(values).returning({ id: shareLinks.id });
+  return row;
+}
+
+/** The link's id when it belongs to the team; undefined otherwise. */
+export async function findShareLinkId(db: Executor, teamId: string, linkId: string) {
+  const [link] = await db
+    .select({ id: shareLinks.id })
+    .from(shareLinks)
+    .where(and(eq(shareLinks.teamId, teamId), eq(shareLinks.id, linkId)));
+  return link;
+}
+
+/** Revokes a link not yet revoked; the rows it changed (none when it was revoked already). */
+export async function revokeLiveShareLink(
+  db: Executor,
+  linkId: string,
+  revokedBy: string,
+  now: Date,
+) {
+  return db
+    .update(shareLinks)
+    .set({ revokedAt: now, revokedBy })
+    .where(and(eq(shareLinks.id, linkId), isNull(shareLinks.revokedAt)))
+    .returning({ id: shareLinks.id });
+}
+
+/** Misses counted so far in one rate-limit window (the bucket the miss rule writes); 0 if none. */
+export async function countShareMisses(db: Executor, key: string, windowStart: Date) {
+  const [row] = await db
+    .select({ count: rateLimitBuckets.count })
+    .from(rateLimitBuckets)
+    .where(and(eq(rateLimitBuckets.key, key), eq(rateLimitBuckets.windowStart, windowStart)));
+  return row?.count ?? 0;
 }

@@ -1,10 +1,12 @@
 import "server-only";
 
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { findCommentRow, listCommentsOfRevision } from "@/db/queries/comments";
-import { revisionComments } from "@/db/schema/comments";
+import {
+  findCommentRow,
+  insertComment,
+  listCommentsOfRevision,
+  setCommentBody,
+} from "@/db/queries/comments";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
@@ -69,16 +71,13 @@ export async function addComment(
     );
   }
   const id = await db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(revisionComments)
-      .values({
-        revisionId: revision.id,
-        parentId: data.parentId ?? null,
-        authorId: ctx.actor.id,
-        body: data.body,
-        increment: data.increment ?? null,
-      })
-      .returning({ id: revisionComments.id });
+    const row = await insertComment(tx, {
+      revisionId: revision.id,
+      parentId: data.parentId ?? null,
+      authorId: ctx.actor.id,
+      body: data.body,
+      increment: data.increment ?? null,
+    });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -114,10 +113,7 @@ export async function editComment(
   }
   const data = parseWithPath(editCommentSchema, input);
   await db.transaction(async (tx) => {
-    await tx
-      .update(revisionComments)
-      .set({ body: data.body, editedAt: new Date() })
-      .where(eq(revisionComments.id, comment.id));
+    await setCommentBody(tx, comment.id, data.body, new Date());
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,

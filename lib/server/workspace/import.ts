@@ -2,13 +2,14 @@ import "server-only";
 
 import { randomUUID } from "node:crypto";
 
-import { count, eq } from "drizzle-orm";
-
 import type { Db, Executor } from "@/db/client";
+import type { NewComment } from "@/db/queries/comments";
+import type { NewRevision } from "@/db/queries/revisions";
+import type { NewReviewEvent } from "@/db/queries/reviews";
+import type { NewScenario } from "@/db/queries/scenarios";
 import { findTeamMembersByEmail } from "@/db/queries/team-export";
-import { revisionComments } from "@/db/schema/comments";
-import { parameterSets, type ParameterSetProvenance } from "@/db/schema/parameter-sets";
-import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { countTeamContent, insertImportedRows } from "@/db/queries/workspace-import";
+import type { ParameterSetProvenance } from "@/db/schema/parameter-sets";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
@@ -24,12 +25,6 @@ export interface TeamImportResponse {
   revisions: number;
   comments: number;
   parameterSets: number;
-}
-
-const CHUNK = 500;
-
-async function insertChunked<T>(rows: T[], insert: (chunk: T[]) => Promise<unknown>) {
-  for (let i = 0; i < rows.length; i += CHUNK) await insert(rows.slice(i, i + CHUNK));
 }
 
 /**
@@ -51,11 +46,8 @@ function nameOf(p: ExportPerson): string {
 }
 
 async function assertEmpty(db: Executor, teamId: string) {
-  const [[s], [p]] = await Promise.all([
-    db.select({ n: count() }).from(scenarios).where(eq(scenarios.teamId, teamId)),
-    db.select({ n: count() }).from(parameterSets).where(eq(parameterSets.teamId, teamId)),
-  ]);
-  if (s.n > 0 || p.n > 0) {
+  const held = await countTeamContent(db, teamId);
+  if (held.scenarios > 0 || held.parameterSets > 0) {
     throw new AppError(
       "conflict:not-empty",
       "Import into a new, empty team: this one has scenarios or parameter sets already.",
@@ -89,10 +81,10 @@ export async function importTeam(
     createdAt: at(s.createdAt),
     updatedAt: at(s.updatedAt),
   }));
-  const scenarioRows: (typeof scenarios.$inferInsert)[] = [];
-  const revisionRows: (typeof scenarioRevisions.$inferInsert)[] = [];
-  const eventRows: (typeof reviewEvents.$inferInsert)[] = [];
-  const commentRows: (typeof revisionComments.$inferInsert)[] = [];
+  const scenarioRows: NewScenario[] = [];
+  const revisionRows: NewRevision[] = [];
+  const eventRows: NewReviewEvent[] = [];
+  const commentRows: NewComment[] = [];
   for (const s of doc.scenarios) {
     const scenarioId = randomUUID();
     const latest = Math.max(...s.revisions.map((r) => r.number));
@@ -156,12 +148,14 @@ export async function importTeam(
 
   await db.transaction(async (tx) => {
     await assertEmpty(tx, ctx.team.id);
-    await insertChunked(sets, (chunk) => tx.insert(parameterSets).values(chunk));
-    await insertChunked(scenarioRows, (chunk) => tx.insert(scenarios).values(chunk));
-    await insertChunked(revisionRows, (chunk) => tx.insert(scenarioRevisions).values(chunk));
-    await insertChunked(eventRows, (chunk) => tx.insert(reviewEvents).values(chunk));
-    // Parents before replies: rows are in creation order, and a reply is never older.
-    await insertChunked(commentRows, (chunk) => tx.insert(revisionComments).values(chunk));
+    // Parents before replies: comment rows are in creation order, and a reply is never older.
+    await insertImportedRows(tx, {
+      parameterSets: sets,
+      scenarios: scenarioRows,
+      revisions: revisionRows,
+      reviewEvents: eventRows,
+      comments: commentRows,
+    });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,

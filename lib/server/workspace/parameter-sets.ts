@@ -1,12 +1,12 @@
-import { and, eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
 import {
+  deleteParameterSetRow,
   findParameterSetView,
+  insertParameterSet,
   listParameterSetsForTeam,
+  updateParameterSetRow,
   type ParameterSetView,
 } from "@/db/queries/parameter-sets";
-import { parameterSets } from "@/db/schema/parameter-sets";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { isUniqueViolation } from "@/lib/server/accounts/pg-errors";
 import { recordAudit } from "@/lib/server/access/audit";
@@ -56,10 +56,12 @@ export async function createParameterSet(db: Db, actor: Actor, teamSlug: string,
   const data = parseWithPath(createParameterSetSchema, input);
   const id = await uniqueName(() =>
     db.transaction(async (tx) => {
-      const [row] = await tx
-        .insert(parameterSets)
-        .values({ teamId: ctx.team.id, ...data, createdBy: ctx.actor.id, updatedBy: ctx.actor.id })
-        .returning({ id: parameterSets.id });
+      const row = await insertParameterSet(tx, {
+        teamId: ctx.team.id,
+        ...data,
+        createdBy: ctx.actor.id,
+        updatedBy: ctx.actor.id,
+      });
       await recordAudit(tx, {
         actorId: ctx.actor.id,
         teamId: ctx.team.id,
@@ -85,10 +87,11 @@ export async function updateParameterSet(
   const data = parseWithPath(updateParameterSetSchema, input);
   await uniqueName(() =>
     db.transaction(async (tx) => {
-      await tx
-        .update(parameterSets)
-        .set({ ...data, updatedBy: ctx.actor.id, updatedAt: new Date() })
-        .where(and(eq(parameterSets.teamId, ctx.team.id), eq(parameterSets.id, before.id)));
+      await updateParameterSetRow(tx, ctx.team.id, before.id, {
+        ...data,
+        updatedBy: ctx.actor.id,
+        updatedAt: new Date(),
+      });
       await recordAudit(tx, {
         actorId: ctx.actor.id,
         teamId: ctx.team.id,
@@ -115,7 +118,7 @@ export async function deleteParameterSet(db: Db, actor: Actor, teamSlug: string,
       target: before.id,
       detail: { name: before.name, values: before.values, provenance: before.provenance },
     });
-    await tx.delete(parameterSets).where(eq(parameterSets.id, before.id));
+    await deleteParameterSetRow(tx, before.id);
   });
   return { deleted: before.id };
 }

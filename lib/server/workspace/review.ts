@@ -1,7 +1,5 @@
 import "server-only";
 
-import { and, desc, eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
 import {
   findRevisionMeta,
@@ -10,11 +8,12 @@ import {
   type RevisionMeta,
 } from "@/db/queries/revisions";
 import {
-  reviewEvents,
-  scenarioRevisions,
-  scenarios,
-  type ReviewState,
-} from "@/db/schema/scenarios";
+  findLastReviewRequester,
+  insertReviewEvent,
+  moveReviewState,
+  setLatestReviewStateIfLatest,
+} from "@/db/queries/reviews";
+import type { ReviewState } from "@/db/schema/scenarios";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { can, type Capability } from "@/lib/shared/permissions";
@@ -100,31 +99,18 @@ export async function changeReview(
   if (!step.from.includes(revision.reviewState)) throw refused;
   const now = new Date();
   const requesterId = await db.transaction(async (tx) => {
-    const moved = await tx
-      .update(scenarioRevisions)
-      .set({ reviewState: step.to, reviewBy: ctx.actor.id, reviewAt: now, importedReviewBy: null })
-      .where(
-        and(
-          eq(scenarioRevisions.id, revision.id),
-          eq(scenarioRevisions.reviewState, revision.reviewState),
-        ),
-      )
-      .returning({ id: scenarioRevisions.id });
+    const moved = await moveReviewState(tx, revision.id, revision.reviewState, {
+      to: step.to,
+      by: ctx.actor.id,
+      at: now,
+    });
     // Someone else moved it between our read and this write.
     if (moved.length === 0) throw refused;
     // The list shows the newest revision's state; a concurrent save of a newer revision
     // makes this condition false, and the new revision's "draft" stands.
-    await tx
-      .update(scenarios)
-      .set({ latestReviewState: step.to })
-      .where(and(eq(scenarios.id, scenario.id), eq(scenarios.latestRevision, revision.number)));
-    const [lastRequest] = await tx
-      .select({ actorId: reviewEvents.actorId })
-      .from(reviewEvents)
-      .where(and(eq(reviewEvents.revisionId, revision.id), eq(reviewEvents.toState, "in_review")))
-      .orderBy(desc(reviewEvents.at))
-      .limit(1);
-    await tx.insert(reviewEvents).values({
+    await setLatestReviewStateIfLatest(tx, scenario.id, revision.number, step.to);
+    const lastRequest = await findLastReviewRequester(tx, revision.id);
+    await insertReviewEvent(tx, {
       revisionId: revision.id,
       fromState: revision.reviewState,
       toState: step.to,

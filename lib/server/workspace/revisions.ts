@@ -1,14 +1,13 @@
 import "server-only";
 
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
 import {
   findRevisionMeta,
+  insertRevision,
   listRevisionsOfScenario,
   type RevisionMeta,
 } from "@/db/queries/revisions";
-import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { setLatestRevision } from "@/db/queries/scenarios";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { isUniqueViolation } from "@/lib/server/accounts/pg-errors";
 import { recordAudit } from "@/lib/server/access/audit";
@@ -97,7 +96,7 @@ export async function saveRevision(
       if (data.baseRevision !== row.latestRevision) return { conflict: row.latestRevision };
       const number = row.latestRevision + 1;
       const now = new Date();
-      await tx.insert(scenarioRevisions).values({
+      await insertRevision(tx, {
         scenarioId: row.id,
         number,
         authorId: ctx.actor.id,
@@ -105,10 +104,7 @@ export async function saveRevision(
         file: data.file as Record<string, unknown>,
         createdAt: now,
       });
-      await tx
-        .update(scenarios)
-        .set({ latestRevision: number, latestReviewState: "draft", updatedAt: now })
-        .where(eq(scenarios.id, row.id));
+      await setLatestRevision(tx, row.id, number, now);
       await recordAudit(tx, {
         actorId: ctx.actor.id,
         teamId: ctx.team.id,

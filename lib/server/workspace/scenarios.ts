@@ -1,13 +1,13 @@
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
 import {
+  deleteScenarioRow,
   findScenarioSummary,
+  insertScenario,
   listScenariosForTeam,
+  updateScenarioRow,
   type ScenarioSummary,
 } from "@/db/queries/scenarios";
-import { findRevisionMeta, type RevisionMeta } from "@/db/queries/revisions";
-import { scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { findRevisionMeta, insertRevision, type RevisionMeta } from "@/db/queries/revisions";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { authorizeTeam } from "@/lib/server/access/team-access";
@@ -60,20 +60,17 @@ export async function createScenario(
   parseScenarioFileOrThrow(data.file);
   const scenarioId = await db.transaction(async (tx) => {
     const now = new Date();
-    const [row] = await tx
-      .insert(scenarios)
-      .values({
-        teamId: ctx.team.id,
-        name: data.name,
-        materialLabel: data.materialLabel,
-        tags: data.tags,
-        createdBy: ctx.actor.id,
-        latestRevision: 1,
-        createdAt: now,
-        updatedAt: now,
-      })
-      .returning({ id: scenarios.id });
-    await tx.insert(scenarioRevisions).values({
+    const row = await insertScenario(tx, {
+      teamId: ctx.team.id,
+      name: data.name,
+      materialLabel: data.materialLabel,
+      tags: data.tags,
+      createdBy: ctx.actor.id,
+      latestRevision: 1,
+      createdAt: now,
+      updatedAt: now,
+    });
+    await insertRevision(tx, {
       scenarioId: row.id,
       number: 1,
       authorId: ctx.actor.id,
@@ -110,10 +107,7 @@ export async function updateScenario(
   const data = parseWithPath(updateScenarioSchema, input);
   const row = await scenarioInTeam(db, ctx.team.id, scenarioId);
   await db.transaction(async (tx) => {
-    await tx
-      .update(scenarios)
-      .set({ ...data, updatedAt: new Date() })
-      .where(eq(scenarios.id, row.id));
+    await updateScenarioRow(tx, row.id, { ...data, updatedAt: new Date() });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -145,7 +139,7 @@ export async function deleteScenario(
       target: row.id,
       detail: { name: row.name, revisions: row.latestRevision },
     });
-    await tx.delete(scenarios).where(eq(scenarios.id, row.id));
+    await deleteScenarioRow(tx, row.id);
   });
   return { deleted: row.id };
 }

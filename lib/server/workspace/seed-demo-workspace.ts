@@ -3,11 +3,9 @@
  * scenario (tension → unload → compression on the demo SMC). Names say "invented" so nobody
  * takes them for data of a real material. Idempotent: rows already present by name are kept.
  */
-import { and, eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { parameterSets } from "@/db/schema/parameter-sets";
-import { scenarios } from "@/db/schema/scenarios";
+import { findParameterSetIdByName } from "@/db/queries/parameter-sets";
+import { findScenarioIdByName } from "@/db/queries/scenarios";
 import type { SignedInActor } from "@/lib/server/accounts/actor";
 import { DEMO_SMC } from "@/lib/mechanics/demo-set";
 import { PRESETS } from "@/lib/client/loading-desk/presets";
@@ -38,22 +36,14 @@ export async function seedDemoWorkspace(
   editor: SignedInActor,
 ): Promise<void> {
   for (const preset of PRESETS) {
-    const [existing] = await db
-      .select({ id: parameterSets.id })
-      .from(parameterSets)
-      .where(and(eq(parameterSets.teamId, team.id), eq(parameterSets.name, preset.name)));
-    if (existing) continue;
+    if (await findParameterSetIdByName(db, team.id, preset.name)) continue;
     await createParameterSet(db, editor, team.slug, {
       name: preset.name,
       values: { id: "A", ...preset.params },
       provenance: { kind: "typed", note: `${preset.note} Invented demonstration values.` },
     });
   }
-  const [scenario] = await db
-    .select({ id: scenarios.id })
-    .from(scenarios)
-    .where(and(eq(scenarios.teamId, team.id), eq(scenarios.name, SCENARIO_NAME)));
-  if (scenario) return;
+  if (await findScenarioIdByName(db, team.id, SCENARIO_NAME)) return;
   await createScenario(db, editor, team.slug, {
     name: SCENARIO_NAME,
     materialLabel: "Demo SMC (invented)",

@@ -2,11 +2,14 @@ import "server-only";
 
 import { createHash, randomBytes } from "node:crypto";
 
-import { and, eq, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { listShareLinksForTeam, type ShareLinkView } from "@/db/queries/share-links";
-import { shareLinks } from "@/db/schema/share-links";
+import {
+  findShareLinkId,
+  insertShareLink,
+  listShareLinksForTeam,
+  revokeLiveShareLink,
+  type ShareLinkView,
+} from "@/db/queries/share-links";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { authorizeTeam } from "@/lib/server/access/team-access";
@@ -53,17 +56,14 @@ export async function createShareLink(
   const data = parseWithPath(createShareLinkSchema, input ?? {});
   const token = newShareToken();
   const id = await db.transaction(async (tx) => {
-    const [row] = await tx
-      .insert(shareLinks)
-      .values({
-        teamId: ctx.team.id,
-        revisionId: revision.id,
-        tokenHash: hashShareToken(token),
-        createdBy: ctx.actor.id,
-        createdAt: now,
-        expiresAt: new Date(now.getTime() + data.expiresInDays * DAY_MS),
-      })
-      .returning({ id: shareLinks.id });
+    const row = await insertShareLink(tx, {
+      teamId: ctx.team.id,
+      revisionId: revision.id,
+      tokenHash: hashShareToken(token),
+      createdBy: ctx.actor.id,
+      createdAt: now,
+      expiresAt: new Date(now.getTime() + data.expiresInDays * DAY_MS),
+    });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -102,17 +102,10 @@ export async function revokeShareLink(
 ): Promise<{ revoked: string }> {
   const ctx = await authorizeTeam(db, actor, teamSlug, "share:create");
   const id = requireUuid(linkId, "share-link");
-  const [link] = await db
-    .select({ id: shareLinks.id })
-    .from(shareLinks)
-    .where(and(eq(shareLinks.teamId, ctx.team.id), eq(shareLinks.id, id)));
+  const link = await findShareLinkId(db, ctx.team.id, id);
   if (!link) throw notFound("share-link");
   await db.transaction(async (tx) => {
-    const changed = await tx
-      .update(shareLinks)
-      .set({ revokedAt: now, revokedBy: ctx.actor.id })
-      .where(and(eq(shareLinks.id, id), isNull(shareLinks.revokedAt)))
-      .returning({ id: shareLinks.id });
+    const changed = await revokeLiveShareLink(tx, id, ctx.actor.id, now);
     if (changed.length) {
       await recordAudit(tx, {
         actorId: ctx.actor.id,

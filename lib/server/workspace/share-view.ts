@@ -1,10 +1,7 @@
 import "server-only";
 
-import { and, eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { viewLiveShareLink } from "@/db/queries/share-links";
-import { rateLimitBuckets } from "@/db/schema/rate-limits";
+import { countShareMisses, viewLiveShareLink } from "@/db/queries/share-links";
 import { AppError } from "@/lib/shared/errors";
 import { hitRateLimit, type RateLimitRule } from "@/lib/server/access/rate-limit";
 
@@ -35,11 +32,7 @@ async function missesSoFar(db: Db, key: string, now: Date): Promise<number> {
   const windowStart = new Date(
     Math.floor(now.getTime() / SHARE_MISS_RULE.windowMs) * SHARE_MISS_RULE.windowMs,
   );
-  const [row] = await db
-    .select({ count: rateLimitBuckets.count })
-    .from(rateLimitBuckets)
-    .where(and(eq(rateLimitBuckets.key, key), eq(rateLimitBuckets.windowStart, windowStart)));
-  return row?.count ?? 0;
+  return countShareMisses(db, key, windowStart);
 }
 
 /** The public read of one shared revision; every failure looks the same from outside. */
