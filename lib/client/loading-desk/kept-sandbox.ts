@@ -1,7 +1,8 @@
 /**
  * The sandbox's scenario kept in this browser while its engineer signs in: the sign-in page and
  * its redirect drop the address's "#s=…", so without this the desk would reopen on the template.
- * One slot, taken (read and cleared) when the sandbox opens again. Pure: the caller owns the
+ * One slot, read when the sandbox opens again and forgotten once the desk has it (the reading and
+ * the forgetting are apart: React may run a state initializer twice). Pure: the caller owns the
  * storage. A stored value that is not a valid scenario file, or is older than a day, is ignored.
  */
 import { z } from "zod";
@@ -34,15 +35,14 @@ export function keepSandboxScenario(
   }
 }
 
-/** The kept scenario parsed like an imported file, or null; the slot is empty afterwards. */
-export function takeKeptSandboxScenario(
+/** The kept scenario parsed like an imported file, or null when there is none worth opening. */
+export function readKeptSandboxScenario(
   storage: KeepStorage,
   now = new Date(),
 ): OpenedScenario | null {
   let stored: string | null;
   try {
     stored = storage.getItem(KEPT_SANDBOX_KEY);
-    storage.removeItem(KEPT_SANDBOX_KEY);
   } catch {
     return null;
   }
@@ -62,7 +62,7 @@ export function takeKeptSandboxScenario(
   return { ...parsed.scenario, desk: readDeskExtras(envelope.data.file) };
 }
 
-/** Empties the slot (after a save: the work is in the team's store now). */
+/** Empties the slot: once the desk has reopened the work, and after a save. */
 export function forgetKeptSandboxScenario(storage: KeepStorage): void {
   try {
     storage.removeItem(KEPT_SANDBOX_KEY);

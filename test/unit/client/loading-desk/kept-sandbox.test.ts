@@ -5,7 +5,7 @@ import {
   KEPT_SANDBOX_KEY,
   type KeepStorage,
   keepSandboxScenario,
-  takeKeptSandboxScenario,
+  readKeptSandboxScenario,
 } from "@/lib/client/loading-desk/kept-sandbox";
 
 function memoryStorage(): KeepStorage & { map: Map<string, string> } {
@@ -31,38 +31,40 @@ describe("sandbox work kept across sign-in (issue 13 item 2)", () => {
   it("gives back the same name and typed path text after sign-in", () => {
     const storage = memoryStorage();
     expect(keepSandboxScenario(storage, edited, at)).toBe(true);
-    const back = takeKeptSandboxScenario(storage, later(60_000));
+    const back = readKeptSandboxScenario(storage, later(60_000));
     expect(back?.name).toBe("Crash rib, transverse");
     expect((back?.desk as { pathText: string }).pathText).toBe(typedPath);
   });
 
-  it("gives it back once: the slot is empty after taking it", () => {
+  it("reads without emptying the slot, and reads nothing once forgotten", () => {
     const storage = memoryStorage();
     keepSandboxScenario(storage, edited, at);
-    takeKeptSandboxScenario(storage, later(1));
+    expect(readKeptSandboxScenario(storage, later(1))?.name).toBe("Crash rib, transverse");
+    expect(readKeptSandboxScenario(storage, later(2))?.name).toBe("Crash rib, transverse");
+    forgetKeptSandboxScenario(storage);
     expect(storage.map.has(KEPT_SANDBOX_KEY)).toBe(false);
-    expect(takeKeptSandboxScenario(storage, later(2))).toBeNull();
+    expect(readKeptSandboxScenario(storage, later(3))).toBeNull();
   });
 
-  it("forgets the work after a save", () => {
+  it("keeps one slot: a second keep replaces the first", () => {
     const storage = memoryStorage();
     keepSandboxScenario(storage, edited, at);
-    forgetKeptSandboxScenario(storage);
-    expect(takeKeptSandboxScenario(storage, later(1))).toBeNull();
+    keepSandboxScenario(storage, { ...edited, name: "Second try" }, later(1));
+    expect(storage.map.size).toBe(1);
+    expect(readKeptSandboxScenario(storage, later(2))?.name).toBe("Second try");
   });
 
   it("ignores work older than a day, damaged values and invalid files", () => {
     const storage = memoryStorage();
     keepSandboxScenario(storage, edited, at);
-    expect(takeKeptSandboxScenario(storage, later(25 * 60 * 60 * 1000))).toBeNull();
+    expect(readKeptSandboxScenario(storage, later(25 * 60 * 60 * 1000))).toBeNull();
 
     storage.setItem(KEPT_SANDBOX_KEY, "{not json");
-    expect(takeKeptSandboxScenario(storage, at)).toBeNull();
+    expect(readKeptSandboxScenario(storage, at)).toBeNull();
 
     const badSet = { ...edited, parameterSets: [{ ...edited.parameterSets[0], E1: "stiff" }] };
     storage.setItem(KEPT_SANDBOX_KEY, JSON.stringify({ keptAt: at.toISOString(), file: badSet }));
-    expect(takeKeptSandboxScenario(storage, at)).toBeNull();
-    expect(storage.map.has(KEPT_SANDBOX_KEY)).toBe(false);
+    expect(readKeptSandboxScenario(storage, at)).toBeNull();
   });
 
   it("says so when the browser refuses storage, and reads nothing from a refusing one", () => {
@@ -78,7 +80,7 @@ describe("sandbox work kept across sign-in (issue 13 item 2)", () => {
       },
     };
     expect(keepSandboxScenario(refusing, edited, at)).toBe(false);
-    expect(takeKeptSandboxScenario(refusing, at)).toBeNull();
+    expect(readKeptSandboxScenario(refusing, at)).toBeNull();
     expect(() => forgetKeptSandboxScenario(refusing)).not.toThrow();
   });
 });
