@@ -41,6 +41,10 @@ export interface LoadingDeskProps {
   teamName?: string;
   /** Saving a revision; without it the save button asks to sign in. */
   onSave?: (file: ScenarioFileJson) => void | Promise<void>;
+  /** The save button's words ("Save revision" unless told). */
+  saveLabel?: string;
+  /** Called with the scenario file just before "Sign in to save" leaves the page. */
+  onSignIn?: (file: ScenarioFileJson) => void;
   /** Keep the state in the address so it can be sent as a link (the sandbox). */
   syncUrl?: boolean;
   /** Measured curves drawn over the chart whose axes they match (test records); not saved. */
@@ -60,6 +64,8 @@ export function LoadingDesk({
   readOnly,
   teamName,
   onSave,
+  saveLabel = "Save revision",
+  onSignIn,
   syncUrl,
   overlays,
   library,
@@ -135,11 +141,12 @@ export function LoadingDesk({
             onClick={() => void onSave(file)}
             className="rounded-md bg-kiln px-3 py-1.5 text-sm text-white hover:bg-kiln-dark"
           >
-            Save revision
+            {saveLabel}
           </button>
         ) : (
           <Link
             href="/sign-in?next=/sandbox"
+            onClick={() => onSignIn?.(file)}
             className="rounded-md bg-kiln px-3 py-1.5 text-sm text-white hover:bg-kiln-dark"
             title="Saving keeps scenarios in your team's store"
           >

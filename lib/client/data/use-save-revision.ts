@@ -36,11 +36,22 @@ export interface CreateScenarioVars {
   file: ScenarioFileJson;
 }
 
+/**
+ * The one way the browser creates a scenario with its revision 1 (POST …/scenarios). The new
+ * scenario page calls it through useCreateScenario; the sandbox's "Save to team…" calls it
+ * directly because its team is chosen in the form, not known when the page opens.
+ */
+export function createScenarioIn(slug: string, vars: CreateScenarioVars) {
+  return apiFetch<CreateScenarioResponse>(teamApi(slug).scenarios(), {
+    method: "POST",
+    body: vars,
+  });
+}
+
 export function useCreateScenario(slug: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (vars: CreateScenarioVars) =>
-      apiFetch<CreateScenarioResponse>(teamApi(slug).scenarios(), { method: "POST", body: vars }),
+    mutationFn: (vars: CreateScenarioVars) => createScenarioIn(slug, vars),
     onSuccess: () => client.invalidateQueries({ queryKey: workspaceKeys.team(slug) }),
   });
 }
