@@ -91,12 +91,6 @@ const walls = [
   },
   {
     files: ["lib/client/**", "components/**", "workers/**"],
-    // Server components that read the database directly; known debt (issue 18), not a pattern.
-    ignores: [
-      "components/site-header.tsx",
-      "components/api-tokens/api-tokens-card.tsx",
-      "components/api-docs/operation-list.tsx",
-    ],
     rules: {
       "@typescript-eslint/no-restricted-imports": [
         "error",

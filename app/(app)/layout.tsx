@@ -1,7 +1,7 @@
 import { redirect } from "next/navigation";
 import type { ReactNode } from "react";
 
-import { SiteHeader } from "@/components/site-header";
+import { SiteHeader } from "@/app/_parts/site-header";
 import { getCurrentSession } from "@/lib/server/accounts/auth/session";
 
 // Everything under (app) needs a session. Pages still check team access themselves:

@@ -1,6 +1,6 @@
 import type { ReactNode } from "react";
 
-import { SiteHeader } from "@/components/site-header";
+import { SiteHeader } from "@/app/_parts/site-header";
 
 export default function AuthLayout({ children }: { children: ReactNode }) {
   return (

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { SiteHeader } from "@/components/site-header";
+import { SiteHeader } from "@/app/_parts/site-header";
 import { Cautions } from "@/components/loading-desk/cautions";
 import { SandboxLoadingDesk } from "@/components/loading-desk/sandbox-loading-desk";
 import { getDb } from "@/db/index";

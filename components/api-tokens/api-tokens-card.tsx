@@ -1,8 +1,6 @@
-import { getDb } from "@/db/index";
-import type { SignedInActor } from "@/lib/server/accounts/actor";
-import { listApiTokens } from "@/lib/server/accounts/api-tokens/manage";
+import type { TeamListItem } from "@/db/queries/teams";
+import type { listApiTokens } from "@/lib/server/accounts/api-tokens/manage";
 import { ROLE_LABELS } from "@/lib/shared/permissions";
-import { listTeamsForUser } from "@/db/queries/teams";
 
 import { Card } from "@/components/ui/card";
 
@@ -11,13 +9,19 @@ import { RevokeTokenButton } from "./revoke-token-button";
 
 const when = (d: Date | null) => (d ? d.toISOString().slice(0, 16).replace("T", " ") : "never");
 
-/** Account settings: personal API tokens for scripts and pipelines (see /docs/api). */
-export async function ApiTokensCard({ actor }: { actor: SignedInActor }) {
-  const db = getDb();
-  const [tokens, teams] = await Promise.all([
-    listApiTokens(db, actor),
-    listTeamsForUser(db, actor.id),
-  ]);
+export type ApiTokenRow = Awaited<ReturnType<typeof listApiTokens>>[number];
+
+/**
+ * Account settings: personal API tokens for scripts and pipelines (see /docs/api). The account
+ * page loads the tokens and teams; this card only shows them.
+ */
+export function ApiTokensCard({
+  tokens,
+  teams,
+}: {
+  tokens: readonly ApiTokenRow[];
+  teams: readonly TeamListItem[];
+}) {
   return (
     <Card title="API tokens" id="api-tokens">
       <p className="text-sm text-ink-soft">

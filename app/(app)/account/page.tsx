@@ -6,6 +6,9 @@ import { ApiTokensCard } from "@/components/api-tokens/api-tokens-card";
 import { TokenActionButton } from "@/components/auth/token-action-button";
 import { Card } from "@/components/ui/card";
 import { FormMessage } from "@/components/ui/form-message";
+import { getDb } from "@/db/index";
+import { listTeamsForUser } from "@/db/queries/teams";
+import { listApiTokens } from "@/lib/server/accounts/api-tokens/manage";
 import { getActor } from "@/lib/server/accounts/auth/session";
 
 export const metadata: Metadata = { title: "Account" };
@@ -13,6 +16,11 @@ export const metadata: Metadata = { title: "Account" };
 export default async function AccountPage() {
   const actor = await getActor();
   if (!actor) return null; // the layout has redirected already
+  const db = getDb();
+  const [tokens, teams] = await Promise.all([
+    listApiTokens(db, actor),
+    listTeamsForUser(db, actor.id),
+  ]);
   return (
     <div className="space-y-6">
       <h1 className="font-display text-3xl font-semibold">Account</h1>
@@ -40,7 +48,7 @@ export default async function AccountPage() {
           </div>
         </Card>
       )}
-      <ApiTokensCard actor={actor} />
+      <ApiTokensCard tokens={tokens} teams={teams} />
       <Card title="Password" id="password">
         <p className="text-sm text-ink-soft">
           To change it,{" "}

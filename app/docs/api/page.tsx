@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 
-import { OperationList } from "@/components/api-docs/operation-list";
-import { SiteHeader } from "@/components/site-header";
+import { OperationList } from "./operation-list";
+import { SiteHeader } from "@/app/_parts/site-header";
 import { API_CAUTION } from "@/lib/server/handoff/openapi/document";
 
 export const metadata: Metadata = { title: "API", description: "Craquelure's public API" };

@@ -3,7 +3,7 @@ import type { Metadata } from "next";
 import { headers } from "next/headers";
 import { notFound } from "next/navigation";
 
-import { SiteHeader } from "@/components/site-header";
+import { SiteHeader } from "@/app/_parts/site-header";
 import { SharedRevisionHeader } from "@/components/share/shared-revision-header";
 import { SharedLoadingDeskLoader } from "@/components/share/shared-loading-desk-loader";
 import { Cautions } from "@/components/loading-desk/cautions";
