@@ -15,6 +15,7 @@ import { applyIsotropicTies, planRefinement, refineNotes } from "./refine-plan";
 import { paramVector, type Bounds, type FittableParam } from "./refine-params";
 import { canReplay, replayRecord } from "./replay";
 import type { RecordPoints, TestRecordInput } from "./types";
+import { fitUncertainty, type FitUncertainty } from "./uncertainty";
 
 export interface RefineProgress {
   round: number;
@@ -52,6 +53,8 @@ export interface RefineResult {
   tied: FittableParam[]; // recomputed from axis 1 (isotropic sets)
   notInformed: FittableParam[]; // asked free, but these records cannot inform them: kept
   notes: string[]; // records used (by name), ties, values kept
+  /** standard errors, 95 % intervals, correlations of `free`; null when cancelled or none free */
+  uncertainty: FitUncertainty | null;
 }
 
 class Cancelled extends Error {}
@@ -165,14 +168,21 @@ export function refine(
     cancelled = true;
   }
   const params = vector.toParams(u);
+  // At the optimum (not after a cancel): one Jacobian serves separability and uncertainty.
+  const J = cancelled || u.length === 0 ? null : jacobian(model, u, y.length);
+  let uncertainty: FitUncertainty | null = null;
+  if (J) {
+    const m = model(u);
+    const r = Float64Array.from(y, (yi, i) => m[i] - yi);
+    const values = vector.names.map((n) => params[n]);
+    uncertainty = fitUncertainty(J, r, vector.names, vector.scale, values);
+  }
   return {
     params,
     residuals: usable.map((record) => fullResidual(params, record)),
     skipped,
-    inseparable:
-      cancelled || u.length === 0
-        ? []
-        : inseparableParams(jacobian(model, u, y.length), vector.names),
+    inseparable: J ? inseparableParams(J, vector.names) : [],
+    uncertainty,
     rounds,
     evaluations,
     cancelled,
