@@ -18,6 +18,7 @@ import { IdentifyReport } from "./identify-report";
 import { ParamsTable } from "./params-table";
 import { RecordPicker } from "./record-picker";
 import { RefinePanel } from "./refine-panel";
+import { UncertaintyTable } from "./uncertainty-table";
 import { SaveFitForm } from "./save-fit-form";
 
 /** Pick records → identify (server, spec E) → optionally refine (worker) → save as a set. */
@@ -129,6 +130,9 @@ export function CalibrationWorkspace({
                 sourceWord={REFINED}
                 marks={refinedValueMarks(refined.result)}
               />
+              {refined.result.uncertainty ? (
+                <UncertaintyTable uncertainty={refined.result.uncertainty} />
+              ) : null}
             </div>
           ) : null}
           <SaveFitForm slug={slug} body={saveBody} />

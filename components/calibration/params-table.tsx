@@ -1,6 +1,7 @@
 import type { MaterialParams } from "@/lib/mechanics/types";
 
-const ROWS: [keyof MaterialParams, string][] = [
+/** The parameters in the order every table shows them, with their units. */
+export const PARAM_ROWS: [keyof MaterialParams, string][] = [
   ["E1", "MPa"],
   ["E2", "MPa"],
   ["nu12", ""],
@@ -38,7 +39,7 @@ export function ParamsTable({
   return (
     <table className="text-sm" data-testid="params-table">
       <tbody>
-        {ROWS.map(([key, unit]) => (
+        {PARAM_ROWS.map(([key, unit]) => (
           <tr key={key} className="border-b border-glaze-line">
             <th scope="row" className="py-1 pr-4 text-left font-medium">
               {key}
