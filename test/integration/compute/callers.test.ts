@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
+import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
 import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
 import { closeComputePool, startTask, tasksInFlight } from "@/lib/server/compute/pool";
 
@@ -13,12 +14,14 @@ import { openTestDb } from "../support/db";
 import {
   callRoute,
   closeAppPoolAfterAll,
+  cookieFor,
   DEMO_FILE,
   makeWorld,
   type CallResult,
   type World,
 } from "../support/workspace";
 import { bearer, tokenFor } from "../api/support";
+import { DEMO_CSV, recordCount, uploadBody } from "../records/support";
 
 process.env.COMPUTE_MAX_TASKS_PER_PERSON = "1";
 
@@ -92,5 +95,22 @@ describe("request-thread callers go through the compute pool", () => {
     expectBusy(held);
     expect(free.status).toBe(201);
     expect(free.body.result.points).toBe(2);
+  });
+
+  it("test-record upload: the CSV is read in the pool, and a busy pool saves nothing", async () => {
+    const cookie = (await cookieFor(db, w.members.editor))!;
+    const before = await recordCount(db, w.teamId);
+    const upload = () =>
+      callRoute(recordsRoute.POST, {
+        method: "POST",
+        params: { team: w.slug },
+        cookie,
+        body: uploadBody(DEMO_CSV),
+      });
+    const { held, free } = await whileHeldThenFree(w.members.editor.id, upload);
+    expectBusy(held);
+    expect(free.status).toBe(201);
+    expect(free.body.pointCount).toBe(DEMO_CSV.trim().split("\n").length - 1);
+    expect(await recordCount(db, w.teamId)).toBe(before + 1);
   });
 });
