@@ -6,11 +6,13 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
+import * as fitsRoute from "@/app/api/v1/teams/[team]/fits/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
 import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
 import { closeComputePool, startTask, tasksInFlight } from "@/lib/server/compute/pool";
+import { uploadTestRecord } from "@/lib/server/records/upload";
 
-import { openTestDb } from "../support/db";
+import { openTestDb, unique } from "../support/db";
 import {
   callRoute,
   closeAppPoolAfterAll,
@@ -112,5 +114,23 @@ describe("request-thread callers go through the compute pool", () => {
     expect(free.status).toBe(201);
     expect(free.body.pointCount).toBe(DEMO_CSV.trim().split("\n").length - 1);
     expect(await recordCount(db, w.teamId)).toBe(before + 1);
+  });
+
+  it("fit save: the records are replayed in the pool", async () => {
+    const record = await uploadTestRecord(db, w.members.editor, w.slug, uploadBody(DEMO_CSV));
+    const cookie = (await cookieFor(db, w.members.editor))!;
+    const save = () =>
+      callRoute(fitsRoute.POST, {
+        method: "POST",
+        params: { team: w.slug },
+        cookie,
+        body: { method: "identify", recordIds: [record.id], name: unique("Fitted") },
+      });
+    const { held, free } = await whileHeldThenFree(w.members.editor.id, save);
+    expectBusy(held);
+    expect(free.status).toBe(201);
+    expect(free.body.residuals).toHaveLength(1);
+    expect(free.body.residuals[0]).toMatchObject({ id: record.id });
+    expect(free.body.residuals[0].rms).toBeGreaterThan(0);
   });
 });
