@@ -10,6 +10,8 @@ import * as fitsRoute from "@/app/api/v1/teams/[team]/fits/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
 import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
 import { closeComputePool, startTask, tasksInFlight } from "@/lib/server/compute/pool";
+import { ComputeBusy } from "@/lib/server/compute/errors";
+import { loadCalibrationReport } from "@/lib/server/handoff/report/load-report";
 import { uploadTestRecord } from "@/lib/server/records/upload";
 
 import { openTestDb, unique } from "../support/db";
@@ -132,5 +134,27 @@ describe("request-thread callers go through the compute pool", () => {
     expect(free.body.residuals).toHaveLength(1);
     expect(free.body.residuals[0]).toMatchObject({ id: record.id });
     expect(free.body.residuals[0].rms).toBeGreaterThan(0);
+  });
+
+  it("calibration report: the curves are computed in the pool", async () => {
+    const viewer = w.members.viewer;
+    const release = holdSlot(viewer.id);
+    let refusal: unknown;
+    try {
+      await loadCalibrationReport(db, viewer, w.slug, w.scenarioId, 1).catch((e) => {
+        refusal = e;
+      });
+    } finally {
+      await release();
+    }
+    expect(refusal).toBeInstanceOf(ComputeBusy);
+    expect((refusal as ComputeBusy).code).toBe("rate-limited:compute");
+    expect((refusal as ComputeBusy).retryAfterSeconds).toBeGreaterThan(0);
+    const report = await loadCalibrationReport(db, viewer, w.slug, w.scenarioId, 1);
+    const setIds = DEMO_FILE.parameterSets.map((s) => s.id);
+    expect(report.skipped).toEqual([]);
+    expect(report.statuses.map((s) => s.setId)).toEqual(setIds);
+    expect(report.charts.stressStrain.paths.map((p) => p.name)).toEqual(setIds);
+    expect(report.charts.tension.paths).toHaveLength(setIds.length);
   });
 });
