@@ -38,3 +38,10 @@ export async function listAuditEventsForTeam(
     pageSize,
   };
 }
+
+export async function insertAuditEvent(
+  db: Executor,
+  values: typeof auditEvents.$inferInsert,
+): Promise<void> {
+  await db.insert(auditEvents).values(values);
+}

@@ -1,8 +1,8 @@
 import { and, asc, eq, gt, isNull } from "drizzle-orm";
 
-import type { Db } from "@/db/client";
+import type { Db, Executor } from "@/db/client";
 import { invitations } from "@/db/schema/invitations";
-import { memberships, teams } from "@/db/schema/teams";
+import { memberships, teams, type Team } from "@/db/schema/teams";
 import { users } from "@/db/schema/users";
 
 // Read-side queries for pages (teams of a user, members, open invitations). They trust the
@@ -59,3 +59,24 @@ export async function listOpenInvitations(db: Db, teamId: string, now = new Date
     .orderBy(asc(invitations.email));
 }
 export type OpenInvitation = Awaited<ReturnType<typeof listOpenInvitations>>[number];
+
+// Writes on the team row itself; the services authorize and audit around them.
+
+/** Inserts a team; a taken slug fails on the unique index (the caller retries with another). */
+export async function insertTeam(
+  db: Executor,
+  values: { slug: string; name: string },
+): Promise<Team> {
+  const [team] = await db.insert(teams).values(values).returning();
+  return team;
+}
+
+export async function renameTeamRow(db: Executor, teamId: string, name: string): Promise<Team> {
+  const [team] = await db.update(teams).set({ name }).where(eq(teams.id, teamId)).returning();
+  return team;
+}
+
+/** Deletes the team; memberships and invitations go by cascade. */
+export async function deleteTeamRow(db: Executor, teamId: string): Promise<void> {
+  await db.delete(teams).where(eq(teams.id, teamId));
+}

@@ -95,3 +95,12 @@ export async function findRecordsForFit(db: Executor, teamId: string, ids: strin
     .from(testRecords)
     .where(and(eq(testRecords.teamId, teamId), inArray(testRecords.id, ids)));
 }
+
+/** The id of the team's record under this name, if there is one. */
+export async function findTestRecordIdByName(db: Executor, teamId: string, name: string) {
+  const [row] = await db
+    .select({ id: testRecords.id })
+    .from(testRecords)
+    .where(and(eq(testRecords.teamId, teamId), eq(testRecords.name, name)));
+  return row;
+}

@@ -1,5 +1,5 @@
 import type { Executor } from "@/db/client";
-import { auditEvents } from "@/db/schema/audit-events";
+import { insertAuditEvent } from "@/db/queries/audit-log";
 
 // Action names are stable strings ("team.create", "member.role-change", ...) so the trail can be
 // queried later; detail holds what a reader needs once the row it points to is gone.
@@ -12,7 +12,7 @@ export interface AuditEntry {
 }
 
 export async function recordAudit(db: Executor, entry: AuditEntry): Promise<void> {
-  await db.insert(auditEvents).values({
+  await insertAuditEvent(db, {
     actorId: entry.actorId,
     teamId: entry.teamId ?? null,
     action: entry.action,

@@ -1,9 +1,7 @@
 import "server-only";
 
-import { and, eq, lt, sql } from "drizzle-orm";
-
 import type { Executor } from "@/db/client";
-import { rateLimitBuckets } from "@/db/schema/rate-limits";
+import { countRateLimitHit, deleteOlderRateLimitWindows } from "@/db/queries/rate-limits";
 
 import { AppError } from "../../shared/errors";
 
@@ -38,21 +36,12 @@ export async function hitRateLimit(
   now: Date = new Date(),
 ): Promise<{ allowed: boolean; retryAfterSeconds: number }> {
   const windowStart = new Date(Math.floor(now.getTime() / rule.windowMs) * rule.windowMs);
-  const [row] = await db
-    .insert(rateLimitBuckets)
-    .values({ key, windowStart, count: 1 })
-    .onConflictDoUpdate({
-      target: [rateLimitBuckets.key, rateLimitBuckets.windowStart],
-      set: { count: sql`${rateLimitBuckets.count} + 1` },
-    })
-    .returning({ count: rateLimitBuckets.count });
-  await db
-    .delete(rateLimitBuckets)
-    .where(and(eq(rateLimitBuckets.key, key), lt(rateLimitBuckets.windowStart, windowStart)));
+  const count = await countRateLimitHit(db, key, windowStart);
+  await deleteOlderRateLimitWindows(db, key, windowStart);
   const retryAfterSeconds = Math.ceil(
     (windowStart.getTime() + rule.windowMs - now.getTime()) / 1000,
   );
-  return { allowed: row.count <= rule.limit, retryAfterSeconds };
+  return { allowed: count <= rule.limit, retryAfterSeconds };
 }
 
 /** Throw the user-facing error when any of the given keys is over its rule. */

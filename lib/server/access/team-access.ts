@@ -1,7 +1,6 @@
-import { and, eq } from "drizzle-orm";
-
 import type { Executor } from "@/db/client";
-import { memberships, teams, type Team } from "@/db/schema/teams";
+import { findTeamWithRoleOfUser } from "@/db/queries/memberships";
+import type { Team } from "@/db/schema/teams";
 import type { Actor, SignedInActor } from "@/lib/server/accounts/actor";
 import { can, ROLE_LABELS, type Capability, type Role } from "@/lib/shared/permissions";
 import { AppError } from "@/lib/shared/errors";
@@ -26,11 +25,7 @@ export async function authorizeTeam(
   capability: Capability,
 ): Promise<TeamContext> {
   if (!actor) throw new AppError("unauthenticated", "Please sign in first.");
-  const [row] = await db
-    .select({ team: teams, role: memberships.role })
-    .from(teams)
-    .innerJoin(memberships, and(eq(memberships.teamId, teams.id), eq(memberships.userId, actor.id)))
-    .where(eq(teams.slug, teamSlug));
+  const row = await findTeamWithRoleOfUser(db, teamSlug, actor.id);
   if (!row) throw new AppError("not-found:team", NOT_FOUND_MESSAGE);
   if (!can(row.role, capability)) {
     throw new AppError(

@@ -1,10 +1,18 @@
 import "server-only";
 
-import { and, eq, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { sessions } from "@/db/schema/sessions";
-import { passwordResetTokens, users } from "@/db/schema/users";
+import {
+  consumePasswordResetToken,
+  findPasswordResetToken,
+  insertPasswordResetToken,
+  useUpResetTokensOfUser,
+} from "@/db/queries/account-tokens";
+import {
+  deleteSessionsOfUser,
+  findUserByEmail,
+  setUserPasswordReturningVerified,
+  setUserVerifiedAt,
+} from "@/db/queries/accounts";
 import { recordAudit } from "@/lib/server/access/audit";
 import { revokeApiTokensOfUser } from "@/db/queries/api-tokens";
 import { hashPassword } from "@/lib/server/accounts/auth/password";
@@ -46,13 +54,15 @@ export async function requestPasswordReset(
     ],
     now,
   );
-  const [user] = await db.select().from(users).where(eq(users.email, email));
+  const user = await findUserByEmail(db, email);
   if (!user) return;
   const token = newToken("reset", now);
   await db.transaction(async (tx) => {
-    await tx
-      .insert(passwordResetTokens)
-      .values({ tokenHash: token.hash, userId: user.id, expiresAt: token.expiresAt });
+    await insertPasswordResetToken(tx, {
+      tokenHash: token.hash,
+      userId: user.id,
+      expiresAt: token.expiresAt,
+    });
     await recordAudit(tx, { actorId: user.id, action: "account.reset-request" });
     await queueMail(
       tx,
@@ -70,10 +80,7 @@ export async function requestPasswordReset(
 /** Checks a reset token without using it (the page shows the error before the form). */
 export async function checkResetToken(db: Db, token: unknown, now: Date = new Date()) {
   if (!looksLikeToken(token)) throw new AppError("not-found:token", MESSAGES.unknown, "token");
-  const [row] = await db
-    .select()
-    .from(passwordResetTokens)
-    .where(eq(passwordResetTokens.tokenHash, hashToken(token)));
+  const row = await findPasswordResetToken(db, hashToken(token));
   const state = tokenState(row, now);
   if (state === "unknown") throw new AppError("not-found:token", MESSAGES.unknown, "token");
   if (state === "used") throw new AppError("used:token", MESSAGES.used, "token");
@@ -91,27 +98,13 @@ export async function resetPassword(
   const row = await checkResetToken(db, data.token, now);
   const { hash, salt } = await hashPassword(data.password);
   return db.transaction(async (tx) => {
-    const consumed = await tx
-      .update(passwordResetTokens)
-      .set({ usedAt: now })
-      .where(
-        and(eq(passwordResetTokens.tokenHash, row.tokenHash), isNull(passwordResetTokens.usedAt)),
-      )
-      .returning({ userId: passwordResetTokens.userId });
-    if (consumed.length === 0) throw new AppError("used:token", MESSAGES.used, "token");
-    await tx
-      .update(passwordResetTokens)
-      .set({ usedAt: now })
-      .where(and(eq(passwordResetTokens.userId, row.userId), isNull(passwordResetTokens.usedAt)));
+    const consumed = await consumePasswordResetToken(tx, row.tokenHash, now);
+    if (!consumed) throw new AppError("used:token", MESSAGES.used, "token");
+    await useUpResetTokensOfUser(tx, row.userId, now);
     // The link reached the mailbox, so the address is proven as well.
-    const [user] = await tx
-      .update(users)
-      .set({ passwordHash: hash, passwordSalt: salt })
-      .where(eq(users.id, row.userId))
-      .returning({ verifiedAt: users.verifiedAt });
-    if (!user.verifiedAt)
-      await tx.update(users).set({ verifiedAt: now }).where(eq(users.id, row.userId));
-    await tx.delete(sessions).where(eq(sessions.userId, row.userId));
+    const user = await setUserPasswordReturningVerified(tx, row.userId, { hash, salt });
+    if (!user.verifiedAt) await setUserVerifiedAt(tx, row.userId, now);
+    await deleteSessionsOfUser(tx, row.userId);
     await revokeApiTokensOfUser(tx, row.userId, now);
     await recordAudit(tx, { actorId: row.userId, action: "account.reset-password" });
     return { userId: row.userId };

@@ -1,9 +1,8 @@
 import "server-only";
 
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { users, type User } from "@/db/schema/users";
+import { findUserByEmail, setUserPassword } from "@/db/queries/accounts";
+import type { User } from "@/db/schema/users";
 import {
   burnPasswordCheck,
   hashPassword,
@@ -38,7 +37,7 @@ export async function authenticate(
     ],
     now,
   );
-  const [user] = await db.select().from(users).where(eq(users.email, data.email));
+  const user = await findUserByEmail(db, data.email);
   if (!user) {
     await burnPasswordCheck(data.password);
     throw new AppError("invalid:credentials", WRONG, "password");
@@ -49,10 +48,7 @@ export async function authenticate(
   if (needsRehash(stored)) {
     // The only moment the plain password is at hand: bring an old record up to today's cost.
     const fresh = await hashPassword(data.password);
-    await db
-      .update(users)
-      .set({ passwordHash: fresh.hash, passwordSalt: fresh.salt })
-      .where(eq(users.id, user.id));
+    await setUserPassword(db, user.id, fresh);
     return { ...user, passwordHash: fresh.hash, passwordSalt: fresh.salt };
   }
   return user;

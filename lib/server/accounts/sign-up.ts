@@ -1,9 +1,8 @@
 import "server-only";
 
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { emailVerificationTokens, users } from "@/db/schema/users";
+import { insertEmailVerificationToken } from "@/db/queries/account-tokens";
+import { findUserRefByEmail, insertUserIfNewEmail } from "@/db/queries/accounts";
 import { recordAudit } from "@/lib/server/access/audit";
 import { enforceRateLimits, RATE_LIMITS } from "@/lib/server/access/rate-limit";
 import { hashPassword } from "@/lib/server/accounts/auth/password";
@@ -48,15 +47,18 @@ export async function signUp(
   let userId: string | null;
   try {
     userId = await db.transaction(async (tx) => {
-      const [user] = await tx
-        .insert(users)
-        .values({ email: data.email, name: data.name, passwordHash: hash, passwordSalt: salt })
-        .onConflictDoNothing({ target: users.email })
-        .returning({ id: users.id });
+      const user = await insertUserIfNewEmail(tx, {
+        email: data.email,
+        name: data.name,
+        passwordHash: hash,
+        passwordSalt: salt,
+      });
       if (!user) return null;
-      await tx
-        .insert(emailVerificationTokens)
-        .values({ tokenHash: token.hash, userId: user.id, expiresAt: token.expiresAt });
+      await insertEmailVerificationToken(tx, {
+        tokenHash: token.hash,
+        userId: user.id,
+        expiresAt: token.expiresAt,
+      });
       await recordAudit(tx, { actorId: user.id, action: "account.sign-up", target: data.email });
       await queueMail(
         tx,
@@ -80,10 +82,7 @@ export async function signUp(
 }
 
 async function tellOwnerOfAttempt(db: Db, email: string, deps: MailDeps, now: Date) {
-  const [owner] = await db
-    .select({ id: users.id, name: users.name })
-    .from(users)
-    .where(eq(users.email, email));
+  const owner = await findUserRefByEmail(db, email);
   if (!owner) return;
   await recordAudit(db, { actorId: owner.id, action: "account.sign-up-again", target: email });
   await queueMail(

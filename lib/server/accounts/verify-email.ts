@@ -1,9 +1,12 @@
 import "server-only";
 
-import { and, eq, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { emailVerificationTokens, users } from "@/db/schema/users";
+import {
+  consumeEmailVerificationToken,
+  findEmailVerificationToken,
+  insertEmailVerificationToken,
+} from "@/db/queries/account-tokens";
+import { verifyUserIfUnverified } from "@/db/queries/accounts";
 import { recordAudit } from "@/lib/server/access/audit";
 import { hashToken, looksLikeToken, newToken, tokenState } from "@/lib/server/accounts/auth/tokens";
 import { verifyEmailMessage } from "@/lib/server/email/templates/verify";
@@ -26,10 +29,7 @@ export async function verifyEmail(
   now: Date = new Date(),
 ): Promise<{ userId: string }> {
   if (!looksLikeToken(token)) throw new AppError("not-found:token", MESSAGES.unknown);
-  const [row] = await db
-    .select()
-    .from(emailVerificationTokens)
-    .where(eq(emailVerificationTokens.tokenHash, hashToken(token)));
+  const row = await findEmailVerificationToken(db, hashToken(token));
   const state = tokenState(row, now);
   if (state === "unknown") throw new AppError("not-found:token", MESSAGES.unknown);
   if (state === "used") throw new AppError("used:token", MESSAGES.used);
@@ -37,21 +37,9 @@ export async function verifyEmail(
 
   return db.transaction(async (tx) => {
     // The usedAt IS NULL condition makes a double click (two requests) consume it once.
-    const consumed = await tx
-      .update(emailVerificationTokens)
-      .set({ usedAt: now })
-      .where(
-        and(
-          eq(emailVerificationTokens.tokenHash, row.tokenHash),
-          isNull(emailVerificationTokens.usedAt),
-        ),
-      )
-      .returning({ userId: emailVerificationTokens.userId });
-    if (consumed.length === 0) throw new AppError("used:token", MESSAGES.used);
-    await tx
-      .update(users)
-      .set({ verifiedAt: now })
-      .where(and(eq(users.id, row.userId), isNull(users.verifiedAt)));
+    const consumed = await consumeEmailVerificationToken(tx, row.tokenHash, now);
+    if (!consumed) throw new AppError("used:token", MESSAGES.used);
+    await verifyUserIfUnverified(tx, row.userId, now);
     await recordAudit(tx, { actorId: row.userId, action: "account.verify" });
     return { userId: row.userId };
   });
@@ -68,9 +56,11 @@ export async function resendVerification(
     { key: `verify:account:${actor.id}`, rule: { limit: 5, windowMs: 60 * 60 * 1000 } },
   ]);
   const token = newToken("verification");
-  await db
-    .insert(emailVerificationTokens)
-    .values({ tokenHash: token.hash, userId: actor.id, expiresAt: token.expiresAt });
+  await insertEmailVerificationToken(db, {
+    tokenHash: token.hash,
+    userId: actor.id,
+    expiresAt: token.expiresAt,
+  });
   await deps.mailer.send(
     verifyEmailMessage({
       to: actor.email,

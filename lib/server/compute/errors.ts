@@ -40,3 +40,14 @@ export function overBudget(label: TaskLabel, budgetMs: number): AppError {
     `The ${label} took longer than ${seconds} s and was stopped. ${ADVICE[label]}`,
   );
 }
+
+/** The pool's own refusals (full, or over budget): a page shows their message, never a 404. */
+const REFUSAL_CODES = new Set([
+  "rate-limited:compute",
+  "unavailable:compute",
+  "invalid:time-budget",
+]);
+
+export function isComputeRefusal(error: unknown): error is AppError {
+  return error instanceof AppError && REFUSAL_CODES.has(error.code);
+}

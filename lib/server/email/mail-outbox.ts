@@ -1,9 +1,13 @@
 import "server-only";
 
-import { and, asc, eq, isNull, lte, sql } from "drizzle-orm";
-
 import type { Db, Executor } from "@/db/client";
-import { mailOutbox } from "@/db/schema/mail-outbox";
+import {
+  countPendingOutboxMessages,
+  insertOutboxMessage,
+  lockNextDueOutboxMessage,
+  markOutboxMessageFailed,
+  markOutboxMessageSent,
+} from "@/db/queries/mail-outbox";
 
 import type { Mailer, MailMessage, MailSendResult } from "../../shared/mail-types";
 
@@ -28,7 +32,7 @@ export function durableMailer(db: Db, transport: Mailer, onQueued?: () => void):
         await transport.send(message);
         return { queued: false };
       } catch (error) {
-        await db.insert(mailOutbox).values({
+        await insertOutboxMessage(db, {
           ...message,
           attempts: 1,
           lastError: reason(error),
@@ -48,7 +52,7 @@ export function durableMailer(db: Db, transport: Mailer, onQueued?: () => void):
  * takes the same time whether or not a mail was written.
  */
 export async function queueMail(db: Executor, message: MailMessage, now = new Date()) {
-  await db.insert(mailOutbox).values({ ...message, attempts: 0, nextAttemptAt: now });
+  await insertOutboxMessage(db, { ...message, attempts: 0, nextAttemptAt: now });
 }
 
 /**
@@ -65,30 +69,18 @@ export async function flushOutbox(
   let failed = 0;
   for (;;) {
     const outcome = await db.transaction(async (tx) => {
-      const [row] = await tx
-        .select()
-        .from(mailOutbox)
-        .where(and(isNull(mailOutbox.sentAt), lte(mailOutbox.nextAttemptAt, now())))
-        .orderBy(asc(mailOutbox.createdAt))
-        .limit(1)
-        .for("update", { skipLocked: true });
+      const row = await lockNextDueOutboxMessage(tx, now());
       if (!row) return "empty" as const;
       try {
         await transport.send({ to: row.to, subject: row.subject, text: row.text, html: row.html });
-        await tx
-          .update(mailOutbox)
-          .set({ sentAt: now(), attempts: row.attempts + 1 })
-          .where(eq(mailOutbox.id, row.id));
+        await markOutboxMessageSent(tx, row.id, { sentAt: now(), attempts: row.attempts + 1 });
         return "sent" as const;
       } catch (error) {
-        await tx
-          .update(mailOutbox)
-          .set({
-            attempts: row.attempts + 1,
-            lastError: reason(error),
-            nextAttemptAt: new Date(now().getTime() + retryDelayMs(row.attempts + 1)),
-          })
-          .where(eq(mailOutbox.id, row.id));
+        await markOutboxMessageFailed(tx, row.id, {
+          attempts: row.attempts + 1,
+          lastError: reason(error),
+          nextAttemptAt: new Date(now().getTime() + retryDelayMs(row.attempts + 1)),
+        });
         return "failed" as const;
       }
     });
@@ -98,9 +90,6 @@ export async function flushOutbox(
       break;
     }
   }
-  const [{ pending }] = await db
-    .select({ pending: sql<number>`count(*)::int` })
-    .from(mailOutbox)
-    .where(isNull(mailOutbox.sentAt));
+  const pending = await countPendingOutboxMessages(db);
   return { sent, failed, pending };
 }

@@ -1,6 +1,6 @@
 // CSRF defence for every non-GET request, decided from headers alone (no database, no session).
 // Pages and server actions get it in proxy.ts; /api routes in their wrappers (route.ts,
-// token-route.ts), because the proxy would first buffer the whole request body.
+// tokenRoute), because the proxy would first buffer the whole request body.
 
 import { AppError } from "@/lib/shared/errors";
 

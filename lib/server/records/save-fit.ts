@@ -30,14 +30,18 @@ interface Outcome {
   method: string;
 }
 
-function compute(records: LoadedRecord[], data: ReturnType<typeof saveFitSchema.parse>): Outcome {
+async function fitOutcome(
+  person: string,
+  records: LoadedRecord[],
+  data: ReturnType<typeof saveFitSchema.parse>,
+): Promise<Outcome> {
   if (data.method === "identify") {
     // The server identifies again: what is saved is what the stored records give, not a claim.
     const result = runIdentify(records, data);
     return {
       params: result.params,
       reports: result.records,
-      residuals: replayResiduals(result.params, records),
+      residuals: await replayResiduals(person, result.params, records),
       warnings: result.warnings,
       options: { law: data.law, modulus: data.modulus, base: data.base ? "given" : "demo" },
       method: "identification from the loading loops (Theil–Sen threshold line)",
@@ -51,7 +55,7 @@ function compute(records: LoadedRecord[], data: ReturnType<typeof saveFitSchema.
   return {
     params,
     reports: [],
-    residuals: replayResiduals(params, records),
+    residuals: await replayResiduals(person, params, records),
     warnings: refineWarnings(
       inputs.filter((r) => !canReplay(r.testType)),
       plan,
@@ -77,7 +81,7 @@ export async function saveFit(db: Db, actor: Actor, teamSlug: string, input: unk
   }
   const data = parseWithPath(saveFitSchema, input);
   const records = await loadRecordsForFit(db, ctx.team.id, data.recordIds);
-  const out = compute(records, data);
+  const out = await fitOutcome(ctx.actor.id, records, data);
   const names = new Map(records.map((r) => [r.id, r.name]));
   const provenance = {
     kind: "fitted" as const,

@@ -5,11 +5,8 @@
  */
 import { createHash } from "node:crypto";
 
-import { and, eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { insertTestRecord } from "@/db/queries/test-records";
-import { testRecords } from "@/db/schema/test-records";
+import { findTestRecordIdByName, insertTestRecord } from "@/db/queries/test-records";
 import { DEMO_CSV_OPTIONS } from "@/lib/calibration/demo-csv";
 import {
   DEMO_PARAMS,
@@ -47,10 +44,7 @@ export async function seedDemoRecords(
 ): Promise<number> {
   let added = 0;
   for (const demo of DEMOS) {
-    const [exists] = await db
-      .select({ id: testRecords.id })
-      .from(testRecords)
-      .where(and(eq(testRecords.teamId, teamId), eq(testRecords.name, demo.name)));
+    const exists = await findTestRecordIdByName(db, teamId, demo.name);
     if (exists) continue;
     const text = csvOf(demo.options);
     const mapping = { strain: 0, stress: 1, transverseStrain: 2 };

@@ -7,7 +7,8 @@ import { insertTestRecord } from "@/db/queries/test-records";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import type { CsvError } from "@/lib/csv/csv-error";
-import { readCurveCsv } from "@/lib/csv/read-curve-csv";
+import { compute } from "@/lib/server/compute/pool";
+import type { CurveCsvOutcome } from "@/lib/server/compute/worker/task-types";
 import { AppError } from "@/lib/shared/errors";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { DetailedAppError } from "@/lib/server/workspace/errors";
@@ -34,9 +35,14 @@ function csvFailure(error: CsvError): AppError {
 export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, input: unknown) {
   const ctx = await authorizeTeam(db, actor, teamSlug, "test-record:edit");
   const data = parseWithPath(uploadTestRecordSchema, input);
-  const read = readCurveCsv(data.text, data.mapping);
+  // The same lib/csv reader, in the compute pool: a hostile file cannot hold the request thread.
+  const read = await compute<CurveCsvOutcome>(
+    { kind: "read-curve-csv", text: data.text, mapping: data.mapping },
+    ctx.actor.id,
+    "file reading",
+  );
   if (!read.ok) throw csvFailure(read.error);
-  const { points, table, warnings } = read;
+  const { points, headers, warnings } = read;
   const bytes = Buffer.from(data.text, "utf8");
   const name = data.name || nameFromFile(data.fileName);
   const { strainUnit: _s, stressUnit: _t, ...columns } = data.mapping;
@@ -50,7 +56,7 @@ export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, i
       laboratory: data.meta.laboratory || null,
       notes: data.meta.notes || null,
       mapping: { ...columns, strainUnit: points.strainUnit, stressUnit: points.stressUnit },
-      headers: table.headers,
+      headers,
       warnings,
       points: toStoredPoints(points),
       pointCount: points.strain.length,

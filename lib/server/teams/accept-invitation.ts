@@ -1,11 +1,9 @@
 import "server-only";
 
-import { and, eq, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { invitations } from "@/db/schema/invitations";
-import { memberships, teams, type Team } from "@/db/schema/teams";
-import { users } from "@/db/schema/users";
+import { consumeInvitation, findInvitationByTokenHash } from "@/db/queries/invitations";
+import { insertMembershipIfAbsent } from "@/db/queries/memberships";
+import type { Team } from "@/db/schema/teams";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import type { Role } from "@/lib/shared/permissions";
@@ -32,12 +30,7 @@ export async function findInvitation(
   now = new Date(),
 ): Promise<InvitationView> {
   if (!looksLikeToken(token)) throw new AppError("not-found:invitation", UNKNOWN);
-  const [row] = await db
-    .select({ invitation: invitations, team: teams, inviterName: users.name })
-    .from(invitations)
-    .innerJoin(teams, eq(teams.id, invitations.teamId))
-    .leftJoin(users, eq(users.id, invitations.invitedBy))
-    .where(eq(invitations.tokenHash, hashToken(token)));
+  const row = await findInvitationByTokenHash(db, hashToken(token));
   if (!row) throw new AppError("not-found:invitation", UNKNOWN);
   const { invitation } = row;
   const state = invitation.revokedAt
@@ -83,26 +76,14 @@ export async function acceptInvitation(
     );
   }
   return db.transaction(async (tx) => {
-    const consumed = await tx
-      .update(invitations)
-      .set({ acceptedAt: now, acceptedBy: user.id })
-      .where(
-        and(
-          eq(invitations.id, view.id),
-          isNull(invitations.acceptedAt),
-          isNull(invitations.revokedAt),
-        ),
-      )
-      .returning({ id: invitations.id });
-    if (consumed.length === 0)
-      throw new AppError("used:invitation", "This invitation was accepted already.");
-    const inserted = await tx
-      .insert(memberships)
-      .values({ teamId: view.team.id, userId: user.id, role: view.role })
-      .onConflictDoNothing()
-      .returning({ userId: memberships.userId });
-    if (inserted.length === 0)
-      throw new AppError("conflict:member", "You are a member of this team already.");
+    const consumed = await consumeInvitation(tx, view.id, user.id, now);
+    if (!consumed) throw new AppError("used:invitation", "This invitation was accepted already.");
+    const inserted = await insertMembershipIfAbsent(tx, {
+      teamId: view.team.id,
+      userId: user.id,
+      role: view.role,
+    });
+    if (!inserted) throw new AppError("conflict:member", "You are a member of this team already.");
     await recordAudit(tx, {
       actorId: user.id,
       teamId: view.team.id,

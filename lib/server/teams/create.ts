@@ -1,7 +1,9 @@
 import "server-only";
 
 import type { Db } from "@/db/client";
-import { memberships, teams, type Team } from "@/db/schema/teams";
+import { insertMembership } from "@/db/queries/memberships";
+import { insertTeam } from "@/db/queries/teams";
+import type { Team } from "@/db/schema/teams";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { isUniqueViolation } from "@/lib/server/accounts/pg-errors";
 import { recordAudit } from "@/lib/server/access/audit";
@@ -20,8 +22,8 @@ export async function createTeam(db: Db, actor: Actor, input: unknown): Promise<
   for (const slug of [base, slugWithSuffix(base), slugWithSuffix(base), slugWithSuffix(base)]) {
     try {
       return await db.transaction(async (tx) => {
-        const [team] = await tx.insert(teams).values({ slug, name }).returning();
-        await tx.insert(memberships).values({ teamId: team.id, userId: founder.id, role: "owner" });
+        const team = await insertTeam(tx, { slug, name });
+        await insertMembership(tx, { teamId: team.id, userId: founder.id, role: "owner" });
         await recordAudit(tx, {
           actorId: founder.id,
           teamId: team.id,

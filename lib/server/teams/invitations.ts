@@ -1,11 +1,9 @@
 import "server-only";
 
-import { and, eq, gt, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { invitations, type Invitation } from "@/db/schema/invitations";
-import { memberships } from "@/db/schema/teams";
-import { users } from "@/db/schema/users";
+import { insertInvitation, revokeOpenInvitationsTo } from "@/db/queries/invitations";
+import { findMemberByEmail } from "@/db/queries/memberships";
+import type { Invitation } from "@/db/schema/invitations";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { canGrant, ROLE_LABELS } from "@/lib/shared/permissions";
@@ -36,11 +34,7 @@ export async function inviteMember(
       "role",
     );
   }
-  const [already] = await db
-    .select({ userId: memberships.userId })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .where(and(eq(memberships.teamId, ctx.team.id), eq(users.email, data.email)));
+  const already = await findMemberByEmail(db, ctx.team.id, data.email);
   if (already) throw new AppError("conflict:member", "This person is a member already.", "email");
   // Each invitation mails an address someone typed: cap it per inviter and per address.
   await enforceRateLimits(
@@ -55,29 +49,15 @@ export async function inviteMember(
 
   const token = newToken("invitation", now);
   const invitation = await db.transaction(async (tx) => {
-    await tx
-      .update(invitations)
-      .set({ revokedAt: now })
-      .where(
-        and(
-          eq(invitations.teamId, ctx.team.id),
-          eq(invitations.email, data.email),
-          isNull(invitations.acceptedAt),
-          isNull(invitations.revokedAt),
-          gt(invitations.expiresAt, now),
-        ),
-      );
-    const [row] = await tx
-      .insert(invitations)
-      .values({
-        teamId: ctx.team.id,
-        email: data.email,
-        role: data.role,
-        tokenHash: token.hash,
-        invitedBy: ctx.actor.id,
-        expiresAt: token.expiresAt,
-      })
-      .returning();
+    await revokeOpenInvitationsTo(tx, ctx.team.id, data.email, now);
+    const row = await insertInvitation(tx, {
+      teamId: ctx.team.id,
+      email: data.email,
+      role: data.role,
+      tokenHash: token.hash,
+      invitedBy: ctx.actor.id,
+      expiresAt: token.expiresAt,
+    });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,

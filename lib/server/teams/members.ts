@@ -1,10 +1,14 @@
 import "server-only";
 
-import { and, count, eq } from "drizzle-orm";
-
 import type { Db, Executor } from "@/db/client";
 import { revokeApiTokensOfUser } from "@/db/queries/api-tokens";
-import { memberships, teams } from "@/db/schema/teams";
+import {
+  countOwners,
+  deleteMembership,
+  findMembership,
+  lockTeamRow,
+  setMemberRole,
+} from "@/db/queries/memberships";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { canGrant, ROLE_LABELS, type Role } from "@/lib/shared/permissions";
@@ -18,19 +22,12 @@ const LAST_OWNER = "A team needs at least one owner. Make another member owner f
 
 /** Locks the team row so two concurrent demotions cannot both see "another owner is left". */
 async function lockTeamAndCountOwners(tx: Executor, teamId: string): Promise<number> {
-  await tx.select({ id: teams.id }).from(teams).where(eq(teams.id, teamId)).for("update");
-  const [row] = await tx
-    .select({ n: count() })
-    .from(memberships)
-    .where(and(eq(memberships.teamId, teamId), eq(memberships.role, "owner")));
-  return row.n;
+  await lockTeamRow(tx, teamId);
+  return countOwners(tx, teamId);
 }
 
 async function findMember(tx: Executor, teamId: string, userId: string) {
-  const [row] = await tx
-    .select()
-    .from(memberships)
-    .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+  const row = await findMembership(tx, teamId, userId);
   if (!row) throw new AppError("not-found:member", "That person is not a member of this team.");
   return row;
 }
@@ -57,10 +54,7 @@ export async function changeMemberRole(db: Db, actor: Actor, input: unknown): Pr
     if (member.role === data.role) return;
     if (member.role === "owner" && owners <= 1)
       throw new AppError("conflict:last-owner", LAST_OWNER, "role");
-    await tx
-      .update(memberships)
-      .set({ role: data.role })
-      .where(and(eq(memberships.teamId, ctx.team.id), eq(memberships.userId, data.userId)));
+    await setMemberRole(tx, ctx.team.id, data.userId, data.role);
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -81,9 +75,7 @@ export async function removeMember(db: Db, actor: Actor, input: unknown): Promis
     assertMayManage(ctx, member.role);
     if (member.role === "owner" && owners <= 1)
       throw new AppError("conflict:last-owner", LAST_OWNER);
-    await tx
-      .delete(memberships)
-      .where(and(eq(memberships.teamId, ctx.team.id), eq(memberships.userId, data.userId)));
+    await deleteMembership(tx, ctx.team.id, data.userId);
     await revokeApiTokensOfUser(tx, data.userId, new Date(), ctx.team.id);
     await recordAudit(tx, {
       actorId: ctx.actor.id,
@@ -104,9 +96,7 @@ export async function leaveTeam(db: Db, actor: Actor, input: unknown): Promise<v
     const member = await findMember(tx, ctx.team.id, ctx.actor.id);
     if (member.role === "owner" && owners <= 1)
       throw new AppError("conflict:last-owner", LAST_OWNER);
-    await tx
-      .delete(memberships)
-      .where(and(eq(memberships.teamId, ctx.team.id), eq(memberships.userId, ctx.actor.id)));
+    await deleteMembership(tx, ctx.team.id, ctx.actor.id);
     await revokeApiTokensOfUser(tx, ctx.actor.id, new Date(), ctx.team.id);
     await recordAudit(tx, {
       actorId: ctx.actor.id,

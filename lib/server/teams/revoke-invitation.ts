@@ -1,9 +1,7 @@
 import "server-only";
 
-import { and, eq, isNull } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { invitations } from "@/db/schema/invitations";
+import { revokeOpenInvitation } from "@/db/queries/invitations";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
@@ -22,26 +20,15 @@ export async function revokeInvitation(
   const data = parseInput(revokeInvitationSchema, input);
   const ctx = await authorizeTeam(db, actor, data.teamSlug, "member:invite");
   await db.transaction(async (tx) => {
-    // The team id in the condition keeps an invitation id from another team out of reach.
-    const rows = await tx
-      .update(invitations)
-      .set({ revokedAt: now })
-      .where(
-        and(
-          eq(invitations.id, data.invitationId),
-          eq(invitations.teamId, ctx.team.id),
-          isNull(invitations.acceptedAt),
-          isNull(invitations.revokedAt),
-        ),
-      )
-      .returning({ email: invitations.email });
-    if (rows.length === 0)
+    // Scoped to this team, so an invitation id from another team stays out of reach.
+    const email = await revokeOpenInvitation(tx, ctx.team.id, data.invitationId, now);
+    if (email === null)
       throw new AppError("not-found:invitation", "That invitation is not open any more.");
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
       action: "invitation.revoke",
-      target: rows[0].email,
+      target: email,
     });
   });
 }

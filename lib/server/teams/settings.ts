@@ -1,9 +1,8 @@
 import "server-only";
 
-import { eq } from "drizzle-orm";
-
 import type { Db } from "@/db/client";
-import { teams, type Team } from "@/db/schema/teams";
+import { deleteTeamRow, renameTeamRow } from "@/db/queries/teams";
+import type { Team } from "@/db/schema/teams";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
@@ -17,11 +16,7 @@ export async function renameTeam(db: Db, actor: Actor, input: unknown): Promise<
   const data = parseInput(renameTeamSchema, input);
   const ctx = await authorizeTeam(db, actor, data.teamSlug, "team:rename");
   return db.transaction(async (tx) => {
-    const [team] = await tx
-      .update(teams)
-      .set({ name: data.name })
-      .where(eq(teams.id, ctx.team.id))
-      .returning();
+    const team = await renameTeamRow(tx, ctx.team.id, data.name);
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: team.id,
@@ -48,6 +43,6 @@ export async function deleteTeam(db: Db, actor: Actor, input: unknown): Promise<
       target: ctx.team.slug,
       detail: { name: ctx.team.name, slug: ctx.team.slug },
     });
-    await tx.delete(teams).where(eq(teams.id, ctx.team.id));
+    await deleteTeamRow(tx, ctx.team.id);
   });
 }

@@ -12,7 +12,16 @@ import { DetailedAppError } from "@/lib/server/workspace/errors";
 
 import { reportCurvesInWorker } from "./report-curves-task";
 import { runInWorker } from "./run-task";
-import type { ComputeTask, PostedTask, TaskOutcome } from "./task-types";
+import type { ComputeTask, CurveCsvOutcome, PostedTask, TaskOutcome } from "./task-types";
+
+function readCurveCsvInWorker(task: Extract<ComputeTask, { kind: "read-curve-csv" }>) {
+  // Only what the upload stores comes back: the table's cells stay in the worker.
+  const read = readCurveCsv(task.text, task.mapping);
+  const outcome: CurveCsvOutcome = read.ok
+    ? { ok: true, points: read.points, headers: read.table.headers, warnings: read.warnings }
+    : { ok: false, error: read.error };
+  return outcome;
+}
 
 function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
   switch (task.kind) {
@@ -39,17 +48,8 @@ function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
           const rms = Number.isFinite(squared) && n > 0 ? Math.sqrt(squared / n) : -1;
           return { id: r.id, rms, points: n };
         });
-    case "read-curve-csv": {
-      // Only what the upload stores comes back: the table's cells stay in the worker.
-      const read = readCurveCsv(task.text, task.mapping);
-      if (!read.ok) return { ok: false, error: read.error };
-      return {
-        ok: true,
-        points: read.points,
-        headers: read.table.headers,
-        warnings: read.warnings,
-      };
-    }
+    case "read-curve-csv":
+      return readCurveCsvInWorker(task);
   }
 }
 

@@ -5,6 +5,8 @@
 import type { MessagePort } from "node:worker_threads";
 
 import type { RecordPoints } from "@/lib/calibration/types";
+import type { CsvError } from "@/lib/csv/csv-error";
+import type { CurvePoints } from "@/lib/csv/extract-points";
 import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
@@ -30,6 +32,11 @@ export type ComputeTask =
       records: { id: string; input: { testType: TestType; points: RecordPoints } }[];
     }
   | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined };
+
+/** What a "read-curve-csv" task sends back: only what an upload stores, not the table's cells. */
+export type CurveCsvOutcome =
+  | { ok: true; points: CurvePoints; headers: string[]; warnings: string[] }
+  | { ok: false; error: CsvError };
 
 /** A task as posted: the port carries "start" and, for runs, the streamed output. */
 export type PostedTask = ComputeTask & { port: MessagePort };

@@ -48,3 +48,6 @@ export function runConformance(
     curves: { history: read.history, columns: replay.columns, rowOf: replay.rowOf },
   };
 }
+
+/** What the compute pool's "conformance" task sends back: everything but the CSV writer. */
+export type ConformanceReplay = Omit<ReturnType<typeof runConformance>, "differences">;

@@ -14,8 +14,34 @@ import { notFound, requireUuid } from "@/lib/server/workspace/errors";
 import { parseScenarioFileOrThrow, parseWithPath } from "@/lib/server/workspace/parse";
 import { revisionInTeam } from "@/lib/server/access/scope";
 
-import { runConformance } from "./run-check";
-import { conformanceUploadSchema } from "./upload-schema";
+import { compute } from "@/lib/server/compute/pool";
+import type { Scenario } from "@/lib/scenario/scenario-schema";
+
+import { differencesCsv } from "./differences-csv";
+import type { ConformanceReplay } from "./run-check";
+import type { ConformanceTolerance } from "./types";
+import { conformanceUploadSchema, type HistoryMapping } from "./upload-schema";
+
+/**
+ * Reads, replays and compares a history in the compute pool (the CSV reader and the driver never
+ * run on the request thread); the download's CSV is written here from what comes back.
+ */
+async function replayInPool(
+  person: string,
+  scenario: Scenario,
+  setId: string | undefined,
+  text: string,
+  tolerance: ConformanceTolerance,
+  mapping: HistoryMapping | undefined,
+) {
+  const run = await compute<ConformanceReplay>(
+    { kind: "conformance", scenario, setId, text, tolerance, mapping },
+    person,
+    "conformance check",
+  );
+  const { history, columns, rowOf } = run.curves;
+  return { ...run, differences: () => differencesCsv(run.result, history, columns, rowOf) };
+}
 
 interface RevisionRef {
   teamSlug: string;
@@ -33,7 +59,14 @@ export async function createConformanceCheck(
   const { revision } = await revisionInTeam(db, ctx.team.id, ref.scenarioId, ref.number);
   const data = parseWithPath(conformanceUploadSchema, input);
   const scenario = parseScenarioFileOrThrow(revision.file);
-  const { result } = runConformance(scenario, data.set, data.text, data.tolerance, data.mapping);
+  const { result } = await replayInPool(
+    ctx.actor.id,
+    scenario,
+    data.set,
+    data.text,
+    data.tolerance,
+    data.mapping,
+  );
   const row = await insertConformanceCheck(db, {
     teamId: ctx.team.id,
     revisionId: revision.id,
@@ -61,8 +94,8 @@ export async function listConformanceChecks(db: Executor, actor: Actor, ref: Rev
   return { items: await listConformanceChecksOfRevision(db, revision.id) };
 }
 
-/** The check replayed again from its stored file: both curves and the per-increment differences. */
-export async function loadConformanceCheck(
+/** One recorded check as stored (its comparison included), without replaying it. */
+export async function findConformanceCheckOfRevision(
   db: Executor,
   actor: Actor,
   ref: RevisionRef,
@@ -76,8 +109,25 @@ export async function loadConformanceCheck(
     requireUuid(checkId, "conformance-check"),
   );
   if (!row) throw notFound("conformance-check");
+  return { ctx, row, scenario, revision };
+}
+
+/** The check replayed again from its stored file: both curves and the per-increment differences. */
+export async function loadConformanceCheck(
+  db: Executor,
+  actor: Actor,
+  ref: RevisionRef,
+  checkId: unknown,
+) {
+  const { ctx, row, scenario, revision } = await findConformanceCheckOfRevision(
+    db,
+    actor,
+    ref,
+    checkId,
+  );
   const file = parseScenarioFileOrThrow(revision.file);
-  const again = runConformance(
+  const again = await replayInPool(
+    ctx.actor.id,
     file,
     row.setId,
     row.fileText,

@@ -8,21 +8,14 @@ import { listParameterSetsForTeam } from "@/db/queries/parameter-sets";
 import { findRevisionMeta, listReviewEvents } from "@/db/queries/revisions";
 import { listTestRecordsForTeam } from "@/db/queries/test-records";
 import type { Actor } from "@/lib/server/accounts/actor";
-import { standardLoadCases } from "@/lib/server/handoff/bundle/load-cases";
-import { runPath } from "@/lib/mechanics/driver";
-import {
-  budgetedRunner,
-  runBudgetMs,
-  TimeBudgetExceeded,
-} from "@/lib/server/handoff/runs/budgeted-runner";
-import { toMaterialParams } from "@/lib/scenario/parameter-set-schema";
+import { compute, computeBudgetMs } from "@/lib/server/compute/pool";
+import type { ReportCurves } from "@/lib/server/compute/worker/report-curves-task";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { listComments } from "@/lib/server/workspace/comments";
 import { parseScenarioFileOrThrow } from "@/lib/server/workspace/parse";
 import { revisionInTeam } from "@/lib/server/access/scope";
 
 import { matchProvenance, type LibrarySet } from "./provenance";
-import { chartGeometry } from "./svg-chart";
 
 export async function loadCalibrationReport(
   db: Db,
@@ -49,50 +42,15 @@ export async function loadCalibrationReport(
     fits.map((f) => ({ ...f, residuals: f.residuals ?? [], warnings: f.warnings ?? [] })),
     new Map(records.map((r) => [r.id, r.name])),
   );
-  // A path may hold up to 1,000,000 increments: each set's run has the API's time budget, and a
-  // set over it is left out of the charts (and said so) rather than holding the page.
-  const runner = budgetedRunner(runBudgetMs());
-  const runs = file.parameterSets.flatMap((set) => {
-    try {
-      return [{ set, run: runner(toMaterialParams(set), file.path.legs) }];
-    } catch (error) {
-      if (error instanceof TimeBudgetExceeded) return [];
-      throw error;
-    }
-  });
-  const skipped = file.parameterSets
-    .filter((s) => !runs.some((r) => r.set.id === s.id))
-    .map((s) => s.id);
-  const stressStrain = chartGeometry(
-    runs.map(({ set, run }) => ({
-      name: set.id,
-      x: run.columns.eps11.subarray(0, run.rows),
-      y: run.columns.sig11.subarray(0, run.rows),
-    })),
-  );
-  const damage = chartGeometry(
-    runs.flatMap(({ set, run }) => [
-      {
-        name: `${set.id} d1`,
-        x: run.columns.increment.subarray(0, run.rows),
-        y: run.columns.d1.subarray(0, run.rows),
-      },
-      {
-        name: `${set.id} d2`,
-        x: run.columns.increment.subarray(0, run.rows),
-        y: run.columns.d2.subarray(0, run.rows),
-      },
-    ]),
-  );
-  const tension = chartGeometry(
-    file.parameterSets.map((set) => {
-      const run = runPath(toMaterialParams(set), standardLoadCases(set)[0].legs);
-      return {
-        name: set.id,
-        x: run.columns.eps11.subarray(0, run.rows),
-        y: run.columns.sig11.subarray(0, run.rows),
-      };
-    }),
+  // A path may hold up to 1,000,000 increments: the curves are computed in the compute pool,
+  // each set with its share of the task's budget; a set over its share is left out of the charts
+  // (and said so) rather than stopping the report. A tenth is kept for the standard tension runs.
+  const sets = file.parameterSets;
+  const perSetBudgetMs = Math.floor((computeBudgetMs() * 0.9) / Math.max(1, sets.length));
+  const { charts, statuses, skipped } = await compute<ReportCurves>(
+    { kind: "report-curves", sets, legs: file.path.legs, perSetBudgetMs },
+    ctx.actor.id,
+    "report",
   );
   return {
     team: ctx.team,
@@ -103,8 +61,8 @@ export async function loadCalibrationReport(
     reviews,
     comments: comments.items,
     checks,
-    charts: { stressStrain, damage, tension },
-    statuses: runs.map(({ set, run }) => ({ setId: set.id, ...run.status })),
+    charts,
+    statuses,
     skipped,
   };
 }

@@ -4,10 +4,10 @@ import "server-only";
  * The parameter-study queue on pg-boss (its own schema "pgboss" in the app's database, created
  * at start). Each set of a study is one job, so every worker process (`npm run worker`) takes a share.
  */
-import { sql } from "drizzle-orm";
 import PgBoss from "pg-boss";
 
 import type { Executor } from "@/db/client";
+import { executePositionalStatement } from "@/db/queries/positional-statement";
 
 export const STUDY_QUEUE = "parameter-study-set";
 
@@ -47,16 +47,7 @@ export async function openStudyQueue(connectionString: string, options: QueueOpt
 export function bossDbOn(db: Executor): PgBoss.Db {
   return {
     async executeSql(text: string, values: unknown[]) {
-      const pieces = text.split(/\$(\d+)/);
-      const query = sql.join(
-        // An undefined value would vanish from drizzle's SQL (pg-boss passes unset defaults so):
-        // it is bound as NULL, as pg does.
-        pieces.map((piece, i) =>
-          i % 2 ? sql`${values[Number(piece) - 1] ?? null}` : sql.raw(piece),
-        ),
-        sql.raw(""),
-      );
-      return { rows: [...(await db.execute(query))] };
+      return { rows: await executePositionalStatement(db, text, values) };
     },
   };
 }

@@ -13,7 +13,8 @@ import { SvgChart } from "@/components/report/svg-chart";
 import { CAUTION_TEXT } from "@/components/loading-desk/cautions";
 import { getDb } from "@/db/index";
 import { getActor } from "@/lib/server/accounts/auth/session";
-import { orNotFound } from "@/lib/server/access/or-not-found";
+import { BusyNotice } from "@/components/ui/busy-notice";
+import { orNotFoundOrBusy } from "@/lib/server/access/or-not-found";
 import { loadCalibrationReport } from "@/lib/server/handoff/report/load-report";
 
 export const metadata: Metadata = { title: "Calibration report" };
@@ -37,12 +38,23 @@ async function load(p: Params) {
   const actor = await getActor();
   if (!actor)
     redirect(`/sign-in?next=${encodeURIComponent(`/reports/${p.team}/${p.scenario}/${p.number}`)}`);
-  return orNotFound(loadCalibrationReport(getDb(), actor, p.team, p.scenario, p.number));
+  return orNotFoundOrBusy(loadCalibrationReport(getDb(), actor, p.team, p.scenario, p.number));
 }
 
 /** A print-friendly calibration report of one revision: no navigation, static charts, A4 margins. */
 export default async function CalibrationReportPage({ params }: { params: Promise<Params> }) {
-  const report = await load(await params);
+  const loaded = await load(await params);
+  if (!loaded.ok) {
+    return (
+      <main id="main">
+        <BusyNotice
+          title="The report's curves could not be computed now"
+          message={loaded.message}
+        />
+      </main>
+    );
+  }
+  const report = loaded.value;
   const { revision, scenario, file } = report;
   return (
     <main

@@ -6,7 +6,7 @@ import { createScenario, listScenarios } from "@/lib/server/workspace/scenarios"
 type Params = { team: string };
 
 /** team:read → ScenarioListResponse (query: sort, dir, tag, review, author, q, page, pageSize). */
-// Also open to personal API tokens of this team (lib/server/http/token-route.ts).
+// Also open to personal API tokens of this team (lib/server/http/route.ts, tokenRoute).
 export const GET = tokenRoute<Params>("team:read", ({ db, actor, params, query }) =>
   listScenarios(db, actor, params.team, query),
 );

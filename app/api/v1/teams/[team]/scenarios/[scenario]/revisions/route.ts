@@ -6,7 +6,7 @@ import { listRevisions, saveRevision } from "@/lib/server/workspace/revisions";
 type Params = { team: string; scenario: string };
 
 /** team:read → RevisionListResponse (newest first). */
-// Also open to personal API tokens of this team (lib/server/http/token-route.ts).
+// Also open to personal API tokens of this team (lib/server/http/route.ts, tokenRoute).
 export const GET = tokenRoute<Params>("team:read", ({ db, actor, params }) =>
   listRevisions(db, actor, params.team, params.scenario),
 );

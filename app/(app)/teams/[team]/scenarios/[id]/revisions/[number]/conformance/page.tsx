@@ -12,7 +12,7 @@ import {
   listConformanceChecks,
   loadConformanceCheck,
 } from "@/lib/server/handoff/conformance/service";
-import { orNotFound } from "@/lib/server/access/or-not-found";
+import { orNotFoundOrBusy } from "@/lib/server/access/or-not-found";
 import { loadRevisionPage } from "@/lib/server/access/revision-page";
 import { parseScenarioFileOrThrow } from "@/lib/server/workspace/parse";
 
@@ -37,7 +37,10 @@ export default async function ConformancePage({
   const ref = { teamSlug: team, scenarioId: id, number };
   const setIds = parseScenarioFileOrThrow(revision.file).parameterSets.map((s) => s.id);
   const { items } = await listConformanceChecks(db, ctx.actor, ref);
-  const shown = check ? await orNotFound(loadConformanceCheck(db, ctx.actor, ref, check)) : null;
+  const loaded = check
+    ? await orNotFoundOrBusy(loadConformanceCheck(db, ctx.actor, ref, check))
+    : null;
+  const shown = loaded?.ok ? loaded.value : null;
   const traces = shown
     ? conformanceTraces(
         shown.curves.history,
@@ -98,6 +101,11 @@ export default async function ConformancePage({
           ))}
         </tbody>
       </table>
+      {loaded && !loaded.ok ? (
+        <p role="alert" className="text-sm text-kiln-dark" data-testid="conformance-busy">
+          This check could not be replayed now: {loaded.message}
+        </p>
+      ) : null}
       {shown && traces ? (
         <section className="space-y-4" aria-label="Selected check">
           <h2 className="font-display text-xl font-semibold">
