@@ -12,7 +12,8 @@ import type { MaterialParams } from "@/lib/mechanics/types";
 import type { FitWorkerApi } from "./fit.worker";
 
 export class FitCancelled extends Error {
-  constructor() {
+  /** The last round's report, whose `best` values the page keeps; null before the first round. */
+  constructor(readonly last: RefineProgress | null = null) {
     super("The refinement was cancelled.");
   }
 }
@@ -20,6 +21,7 @@ export class FitCancelled extends Error {
 export class FitClient {
   private worker: Worker | null = null;
   private reject: ((e: unknown) => void) | null = null;
+  private last: RefineProgress | null = null;
 
   async refine(
     records: TestRecordInput[],
@@ -29,13 +31,18 @@ export class FitClient {
     onProgress: (p: RefineProgress) => void,
   ): Promise<RefineResult> {
     this.cancel();
+    this.last = null;
     const worker = new Worker(new URL("./fit.worker.ts", import.meta.url), { name: "fit" });
     this.worker = worker;
     const api = Comlink.wrap<FitWorkerApi>(worker);
     try {
       return await new Promise<RefineResult>((resolve, reject) => {
         this.reject = reject;
-        api.refine(records, start, free, bounds, Comlink.proxy(onProgress)).then(resolve, reject);
+        const report = (p: RefineProgress) => {
+          this.last = p;
+          onProgress(p);
+        };
+        api.refine(records, start, free, bounds, Comlink.proxy(report)).then(resolve, reject);
       });
     } finally {
       if (this.worker === worker) this.dispose();
@@ -43,7 +50,7 @@ export class FitClient {
   }
 
   cancel(): void {
-    this.reject?.(new FitCancelled());
+    this.reject?.(new FitCancelled(this.last));
     this.dispose();
   }
 

@@ -4,7 +4,7 @@ import { useEffect, useRef, useState } from "react";
 
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
-import type { RefineProgress, RefineResult } from "@/lib/calibration/refine";
+import { keptOnCancel, type RefineProgress, type RefineResult } from "@/lib/calibration/refine";
 import { checkRefineBounds } from "@/lib/calibration/refine-bounds-check";
 import { defaultBounds, FITTABLE, type FittableParam } from "@/lib/calibration/refine-params";
 import type { MaterialParams } from "@/lib/mechanics/types";
@@ -62,16 +62,25 @@ export function RefinePanel({
     setError(null);
     setRunning(true);
     setProgress(null);
+    let inputs: Awaited<ReturnType<typeof loadRecordInputs>> = [];
     try {
-      const inputs = await loadRecordInputs(slug, recordIds);
+      inputs = await loadRecordInputs(slug, recordIds);
       client.current ??= new FitClient();
       const out = await client.current.refine(inputs, start, free, bounds, setProgress);
       setResult(out);
       onResult(out, free, bounds);
     } catch (e) {
+      // A cancel keeps the best values of the last finished round, marked as such.
+      const kept = e instanceof FitCancelled ? keptOnCancel(inputs, start, { free }, e.last) : null;
+      if (kept) {
+        setResult(kept);
+        onResult(kept, free, bounds);
+      }
       setError(
         e instanceof FitCancelled
-          ? "Cancelled: nothing changed."
+          ? kept
+            ? null
+            : "Cancelled before the first round finished: nothing changed."
           : e instanceof Error
             ? e.message
             : "The refinement stopped.",

@@ -21,6 +21,8 @@ export interface RefineProgress {
   round: number;
   evaluations: number;
   rms: number; // scaled (relative to each record's peak stress), over the fitted samples
+  /** the best parameters so far: what a cancel keeps (the host may stop the worker outright) */
+  best: MaterialParams;
 }
 
 export interface RefineOptions {
@@ -158,7 +160,12 @@ export function refine(
       const nextRms = rmsOf(next);
       const improved = nextRms < rms;
       if (improved) u = next;
-      options.onProgress?.({ round: rounds, evaluations, rms: Math.min(rms, nextRms) });
+      options.onProgress?.({
+        round: rounds,
+        evaluations,
+        rms: Math.min(rms, nextRms),
+        best: vector.toParams(u),
+      });
       const gain = (rms - nextRms) / Math.max(rms, 1e-300);
       if (improved) rms = nextRms;
       if (!improved || gain < 1e-6) break;
@@ -218,5 +225,37 @@ function fullResidual(params: MaterialParams, record: TestRecordInput): RecordRe
     id: record.id,
     rms: Math.sqrt(s / Math.max(1, predicted.length)),
     points: predicted.length,
+  };
+}
+
+/**
+ * What a refinement stopped from outside (its worker ended) leaves: the best values of the last
+ * round reported, with the plan and notes of a full run but no residuals or uncertainty, which
+ * would need more replays. Nothing at all when no round had finished.
+ */
+export function keptOnCancel(
+  records: TestRecordInput[],
+  start: MaterialParams,
+  options: Pick<RefineOptions, "free" | "isotropic">,
+  last: RefineProgress | null,
+): RefineResult | null {
+  if (!last) return null;
+  const usable = records.filter((r) => canReplay(r.testType));
+  const left = records.filter((r) => !canReplay(r.testType));
+  const plan = planRefinement(usable, start, options.free, options.isotropic);
+  return {
+    params: last.best,
+    residuals: [],
+    skipped: left.map((r) => r.id),
+    inseparable: [],
+    rounds: last.round,
+    evaluations: last.evaluations,
+    cancelled: true,
+    ...plan,
+    notes: [
+      `Cancelled after round ${last.round}: these are the best values found so far (relative RMS ${last.rms.toExponential(2)}); residuals and intervals were not computed.`,
+      ...refineNotes(usable, left, plan),
+    ],
+    uncertainty: null,
   };
 }

@@ -2,7 +2,7 @@
 import { describe, expect, it } from "vitest";
 import { D18_PEAKS, DEMO_PARAMS } from "@/lib/calibration/demo-curves";
 import { inseparableParams } from "@/lib/calibration/identifiability";
-import { refine } from "@/lib/calibration/refine";
+import { keptOnCancel, refine, type RefineProgress } from "@/lib/calibration/refine";
 import type { TestRecordInput } from "@/lib/calibration/types";
 import { cyclicRecord } from "./driver-records";
 
@@ -119,5 +119,32 @@ describe("separability from the Jacobian", () => {
       Math.cos(3 * i),
     ]);
     expect(inseparableParams(independent, ["p", "q", "r"])).toEqual([]);
+  });
+});
+
+describe("keptOnCancel", () => {
+  it("keeps the best values of the last round reported, which a full run ends on", () => {
+    const rounds: RefineProgress[] = [];
+    const full = refine(records, perturbed, {
+      free: ["E1", "Y0_1", "a1"],
+      onProgress: (p) => rounds.push(p),
+    });
+    const last = rounds[rounds.length - 1];
+    // the run's answer is the best of its last round
+    expect(last.best.E1).toBe(full.params.E1);
+    expect(last.best.a1).toBe(full.params.a1);
+    // stopped after the first round, the first round's best is kept, marked cancelled
+    const kept = keptOnCancel(records, perturbed, { free: ["E1", "Y0_1", "a1"] }, rounds[0])!;
+    expect(kept.params).toEqual(rounds[0].best);
+    expect(kept.params.E1).not.toBe(perturbed.E1);
+    expect(kept.cancelled).toBe(true);
+    expect(kept.rounds).toBe(1);
+    expect(kept.free).toEqual(full.free);
+    expect(kept.notes[0]).toMatch(/Cancelled after round 1: these are the best values/);
+    expect(kept.uncertainty).toBeNull();
+  });
+
+  it("keeps nothing when no round had finished", () => {
+    expect(keptOnCancel(records, perturbed, { free: ["E1"] }, null)).toBeNull();
   });
 });
