@@ -1,12 +1,13 @@
 /**
  * Speed of the fitting code (issue 6; not a timed test): identification of a 10-loop,
  * 5,000-point record (target < 200 ms) and refinement of 6 free parameters on 3 records ×
- * 2,000 points (target < 5 s). All data invented (spec A.3 demo set). Last line:
- * `bench:fit: identify=<ms> refine=<ms>`.
+ * 2,000 points (target < 5 s), and the uncertainty of the refined values on the same records
+ * (standard errors, intervals, correlations; refine + uncertainty < 5 s). All data invented
+ * (spec A.3 demo set). Last line: `bench:fit: identify=<ms> refine=<ms> uncertainty=<ms>`.
  */
 import { DEMO_PARAMS, demoCyclicTension } from "@/lib/calibration/demo-curves";
 import { identify } from "@/lib/calibration/identify";
-import { refine } from "@/lib/calibration/refine";
+import { refine, uncertaintyAt } from "@/lib/calibration/refine";
 import type { RecordPoints, TestRecordInput } from "@/lib/calibration/types";
 import { runPath } from "@/lib/mechanics/driver";
 import type { Leg } from "@/lib/mechanics/types";
@@ -84,4 +85,13 @@ console.log(
 console.log(
   `refine: RMS per record ${fit.residuals.map((r) => `${r.id} ${r.rms.toFixed(3)} MPa`).join(", ")}`,
 );
-console.log(`bench:fit: identify=${identifyMs.toFixed(0)} refine=${refineMs.toFixed(0)}`);
+const free = ["E1", "Y0_1", "a1", "alpha", "k6", "b"] as const;
+t = performance.now();
+const sure = uncertaintyAt(records, fit.params, { free: [...free] });
+const uncertaintyMs = performance.now() - t;
+console.log(
+  `uncertainty: ${(sure?.params ?? []).map((q) => `${q.name} ± ${q.se?.toPrecision(2) ?? "—"}`).join(", ")}`,
+);
+console.log(
+  `bench:fit: identify=${identifyMs.toFixed(0)} refine=${refineMs.toFixed(0)} uncertainty=${uncertaintyMs.toFixed(0)}`,
+);

@@ -87,12 +87,20 @@ function prepare(records: TestRecordInput[], maxPoints: number): { sets: Prepare
   return { sets, y };
 }
 
-export function refine(
+type ProblemOptions = Pick<
+  RefineOptions,
+  "free" | "bounds" | "isotropic" | "maxPointsPerRecord" | "shouldCancel"
+>;
+
+/**
+ * The least-squares problem of a refinement: the replayable records, the plan (free, tied, not
+ * informed), the stacked scaled data y, the scaled parameter vector and the model u → prediction.
+ */
+function leastSquaresProblem(
   records: TestRecordInput[],
   start: MaterialParams,
-  options: RefineOptions,
-): RefineResult {
-  assertRefineBounds(start, options.free, options.bounds); // before any replay
+  options: ProblemOptions,
+) {
   const usable = records.filter((r) => canReplay(r.testType));
   const left = records.filter((r) => !canReplay(r.testType));
   const skipped = left.map((r) => r.id);
@@ -124,6 +132,46 @@ export function refine(
     }
     return out;
   };
+  return { usable, left, skipped, plan, y, vector, model, evaluations: () => evaluations };
+}
+
+/** Standard errors, intervals and correlations at u from the model's Jacobian J there. */
+function uncertaintyFrom(
+  problem: ReturnType<typeof leastSquaresProblem>,
+  J: number[][],
+  u: number[],
+): FitUncertainty | null {
+  const { model, y, vector } = problem;
+  const m = model(u);
+  const r = Float64Array.from(y, (yi, i) => m[i] - yi);
+  const params = vector.toParams(u);
+  const values = vector.names.map((n) => params[n]);
+  return fitUncertainty(J, r, vector.names, vector.scale, values);
+}
+
+/**
+ * The uncertainty of given values (a saved fit's) on the records: p + 2 replays, no search. The
+ * server uses it so that what is stored comes from the stored records, not the browser's claim.
+ */
+export function uncertaintyAt(
+  records: TestRecordInput[],
+  params: MaterialParams,
+  options: Omit<ProblemOptions, "shouldCancel">,
+): FitUncertainty | null {
+  const problem = leastSquaresProblem(records, params, options);
+  const u = problem.vector.start.slice();
+  if (u.length === 0) return null;
+  return uncertaintyFrom(problem, jacobian(problem.model, u, problem.y.length), u);
+}
+
+export function refine(
+  records: TestRecordInput[],
+  start: MaterialParams,
+  options: RefineOptions,
+): RefineResult {
+  assertRefineBounds(start, options.free, options.bounds); // before any replay
+  const problem = leastSquaresProblem(records, start, options);
+  const { usable, left, skipped, plan, y, vector, model } = problem;
   const data = { x: Float64Array.from(y, (_, i) => i), y };
   const rmsOf = (u: ArrayLike<number>) => {
     const m = model(u);
@@ -162,7 +210,7 @@ export function refine(
       if (improved) u = next;
       options.onProgress?.({
         round: rounds,
-        evaluations,
+        evaluations: problem.evaluations(),
         rms: Math.min(rms, nextRms),
         best: vector.toParams(u),
       });
@@ -177,13 +225,7 @@ export function refine(
   const params = vector.toParams(u);
   // At the optimum (not after a cancel): one Jacobian serves separability and uncertainty.
   const J = cancelled || u.length === 0 ? null : jacobian(model, u, y.length);
-  let uncertainty: FitUncertainty | null = null;
-  if (J) {
-    const m = model(u);
-    const r = Float64Array.from(y, (yi, i) => m[i] - yi);
-    const values = vector.names.map((n) => params[n]);
-    uncertainty = fitUncertainty(J, r, vector.names, vector.scale, values);
-  }
+  const uncertainty = J ? uncertaintyFrom(problem, J, u) : null;
   return {
     params,
     residuals: usable.map((record) => fullResidual(params, record)),
@@ -191,7 +233,7 @@ export function refine(
     inseparable: J ? inseparableParams(J, vector.names) : [],
     uncertainty,
     rounds,
-    evaluations,
+    evaluations: problem.evaluations(),
     cancelled,
     ...plan,
     notes: refineNotes(usable, left, plan),

@@ -6,7 +6,7 @@
 import { describe, expect, it } from "vitest";
 
 import { D18_PEAKS, DEMO_PARAMS } from "@/lib/calibration/demo-curves";
-import { refine } from "@/lib/calibration/refine";
+import { refine, uncertaintyAt } from "@/lib/calibration/refine";
 import { fitUncertainty, tQuantile975 } from "@/lib/calibration/uncertainty";
 
 import { cyclicRecord } from "./driver-records";
@@ -131,4 +131,28 @@ describe("coverage of the 95 % intervals", () => {
       expect(hits[name] / repetitions, name).toBeLessThanOrEqual(0.99);
     }
   }, 240_000);
+});
+
+describe("uncertaintyAt", () => {
+  it("gives at a refinement's answer the same intervals the refinement reported", () => {
+    const points = cyclicRecord(DEMO_PARAMS, "tension-1", D18_PEAKS, {
+      increments: 20,
+      noiseStress: 0.5,
+      seed: 7,
+    });
+    const records = [{ id: "t", testType: "tension-1" as const, points }];
+    const options = { free: ["E1", "Y0_1", "a1", "alpha"] as const, isotropic: false };
+    const fit = refine(
+      records,
+      { ...DEMO_PARAMS, E1: 10500 },
+      { ...options, free: [...options.free] },
+    );
+    const again = uncertaintyAt(records, fit.params, { ...options, free: [...options.free] })!;
+    for (const [j, p] of again.params.entries()) {
+      const reported = fit.uncertainty!.params[j];
+      expect(p.name).toBe(reported.name);
+      expect(p.se! / reported.se! - 1).toBeLessThan(1e-3);
+    }
+    expect(uncertaintyAt(records, fit.params, { free: [], isotropic: false })).toBeNull();
+  });
 });
