@@ -52,7 +52,8 @@ export function ReviewPanel(props: ReviewPanelProps) {
   const [choiceError, setChoiceError] = useState<string | null>(null);
   const state = (review.data?.revision.review.state ?? "draft") as ReviewState;
   const actions = reviewActionsFor(state, props);
-  const choices = props.reviewerChoices ?? [];
+  // Nobody reviews their own request: the server refuses it, so the form never offers it.
+  const choices = (props.reviewerChoices ?? []).filter((p) => p.id !== props.me.id);
   const reviewersError =
     choiceError ?? (act.isError && isAboutReviewers(act.error) ? messageOf(act.error) : null);
 
