@@ -6,18 +6,27 @@ import { useState } from "react";
 import { ReviewBadge } from "@/components/scenarios/review-badge";
 import { Panel } from "@/components/ui/panel";
 import { MAIL_QUEUED_NOTICE } from "@/lib/shared/mail-types";
-import { messageOf } from "@/lib/client/data/api-fetch";
+import { ApiError, messageOf } from "@/lib/client/data/api-fetch";
 import { formatWhen, personName } from "@/lib/client/data/format";
-import { importedPersonText, importedVerdictText } from "@/lib/shared/imported-names";
+import { importedVerdictText } from "@/lib/shared/imported-names";
 import {
   REVIEW_ACTION_LABELS,
   reviewActionsFor,
   reviewStateLabel,
 } from "@/lib/client/data/review-words";
-import type { PersonRef, ReviewState } from "@/lib/client/data/types";
+import type { PersonRef, ReviewAction, ReviewState } from "@/lib/client/data/types";
 import { useReview, useReviewAction } from "@/lib/client/data/use-review";
 
 import { CommentsSection } from "./comments-section";
+import { ReviewHistoryList } from "./review-history-list";
+import { ReviewerChoice } from "./reviewer-choice";
+
+const CHOOSE_ONE = "Choose at least one reviewer.";
+
+/** A refusal about the chosen reviewers belongs beside the checkboxes, not under the buttons. */
+function isAboutReviewers(error: unknown): boolean {
+  return error instanceof ApiError && error.code === "invalid:reviewers";
+}
 
 export interface ReviewPanelProps {
   slug: string;
@@ -28,6 +37,8 @@ export interface ReviewPanelProps {
   canJudge: boolean;
   canComment: boolean;
   maxIncrement: number;
+  /** The team's reviewers and owners, the viewer left out: whom a request may be asked of. */
+  reviewerChoices?: PersonRef[];
 }
 
 /** The review of the revision on screen: its state, the buttons the role allows, the trail. */
@@ -37,8 +48,34 @@ export function ReviewPanel(props: ReviewPanelProps) {
   const act = useReviewAction(slug, scenarioId, number);
   const router = useRouter();
   const [note, setNote] = useState("");
+  const [chosen, setChosen] = useState<string[]>([]);
+  const [choiceError, setChoiceError] = useState<string | null>(null);
   const state = (review.data?.revision.review.state ?? "draft") as ReviewState;
   const actions = reviewActionsFor(state, props);
+  // Nobody reviews their own request: the server refuses it, so the form never offers it.
+  const choices = (props.reviewerChoices ?? []).filter((p) => p.id !== props.me.id);
+  const reviewersError =
+    choiceError ?? (act.isError && isAboutReviewers(act.error) ? messageOf(act.error) : null);
+
+  const run = (action: ReviewAction) => {
+    if (action === "request" && chosen.length === 0) {
+      setChoiceError(CHOOSE_ONE);
+      return;
+    }
+    setChoiceError(null);
+    const input =
+      action === "request"
+        ? { action, note: note.trim(), reviewers: chosen }
+        : { action, note: note.trim() };
+    act.mutate(input, {
+      onSuccess: () => {
+        setNote("");
+        setChosen([]);
+        // The page header shows the state too: read it again from the server.
+        router.refresh();
+      },
+    });
+  };
 
   return (
     <Panel id="review" title={`Review of revision ${number}`} aside={<ReviewBadge state={state} />}>
@@ -60,6 +97,18 @@ export function ReviewPanel(props: ReviewPanelProps) {
             onSubmit={(e) => e.preventDefault()}
             aria-label="Review action"
           >
+            {actions.includes("request") ? (
+              <ReviewerChoice
+                choices={choices}
+                chosen={chosen}
+                onChange={(next) => {
+                  setChosen(next);
+                  if (next.length) setChoiceError(null);
+                }}
+                error={reviewersError}
+                disabled={act.isPending}
+              />
+            ) : null}
             <label htmlFor="review-note" className="block font-medium">
               Note with the {props.canJudge && state === "in_review" ? "verdict" : "request"}{" "}
               (optional)
@@ -78,18 +127,7 @@ export function ReviewPanel(props: ReviewPanelProps) {
                   key={action}
                   type="button"
                   disabled={act.isPending}
-                  onClick={() =>
-                    act.mutate(
-                      { action, note: note.trim() },
-                      {
-                        onSuccess: () => {
-                          setNote("");
-                          // The page header shows the state too: read it again from the server.
-                          router.refresh();
-                        },
-                      },
-                    )
-                  }
+                  onClick={() => run(action)}
                   className={`rounded-md px-3 py-1.5 text-white disabled:opacity-60 ${
                     action === "request-changes"
                       ? "bg-kiln hover:bg-kiln-dark"
@@ -102,7 +140,7 @@ export function ReviewPanel(props: ReviewPanelProps) {
             </div>
           </form>
         ) : null}
-        {act.isError ? (
+        {act.isError && !isAboutReviewers(act.error) ? (
           <p role="alert" className="text-kiln-dark">
             {messageOf(act.error)}
           </p>
@@ -118,22 +156,7 @@ export function ReviewPanel(props: ReviewPanelProps) {
             {MAIL_QUEUED_NOTICE}
           </p>
         ) : null}
-        {review.data?.history.length ? (
-          <ol className="space-y-1 border-l-2 border-glaze-line pl-3" aria-label="Review history">
-            {review.data.history.map((h) => (
-              <li key={h.id}>
-                <span className="font-medium">
-                  {h.importedActor != null
-                    ? importedPersonText(h.importedActor)
-                    : personName(h.actor)}
-                </span>{" "}
-                {reviewStateLabel(h.from)} → {reviewStateLabel(h.to)}
-                <span className="text-ink-faint">, {formatWhen(h.at)}</span>
-                {h.note ? <p className="whitespace-pre-wrap text-ink-soft">{h.note}</p> : null}
-              </li>
-            ))}
-          </ol>
-        ) : null}
+        <ReviewHistoryList history={review.data?.history ?? []} />
         <CommentsSection {...props} />
       </div>
     </Panel>

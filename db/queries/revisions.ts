@@ -1,11 +1,11 @@
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 
 import type { Executor } from "@/db/client";
 import { reviewEvents, scenarioRevisions } from "@/db/schema/scenarios";
 import { users } from "@/db/schema/users";
 
-import { personRef } from "./users-view";
+import { personRef, type PersonRef } from "./users-view";
 
 // Revisions of one scenario. The caller has found the scenario in the actor's team.
 
@@ -83,6 +83,12 @@ export async function findRevisionRow(db: Executor, scenarioId: string, number: 
 
 const actor = alias(users, "actor");
 
+// Whom a request was asked of, as people (accounts since deleted drop out), by name.
+const askedOf = sql<PersonRef[]>`coalesce((
+  select json_agg(json_build_object('id', asked.id, 'name', asked.name) order by asked.name, asked.id)
+  from ${users} as asked where asked.id = any(${reviewEvents.chosenReviewers})
+), '[]'::json)`;
+
 export async function listReviewEvents(db: Executor, revisionId: string) {
   const rows = await db
     .select({
@@ -93,6 +99,7 @@ export async function listReviewEvents(db: Executor, revisionId: string) {
       note: reviewEvents.note,
       at: reviewEvents.at,
       importedActor: reviewEvents.importedActor,
+      askedOf,
     })
     .from(reviewEvents)
     .leftJoin(actor, eq(actor.id, reviewEvents.actorId))

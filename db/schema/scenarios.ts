@@ -91,6 +91,10 @@ export const reviewEvents = pgTable(
     at: timestamp("at", { withTimezone: true }).notNull().defaultNow(),
     // Imported history: the actor's name from the file, as text (actor_id stays empty).
     importedActor: text("imported_actor"),
+    // On a request (to_state in_review): the users the requester chose to judge it, kept on
+    // the event so the history says whom each request was asked of. Empty on verdicts, on
+    // imported history and on requests made before reviewers were chosen.
+    chosenReviewers: uuid("chosen_reviewers").array().notNull().default([]),
   },
   (t) => [index("review_events_revision_idx").on(t.revisionId, t.at)],
 );

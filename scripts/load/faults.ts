@@ -111,7 +111,11 @@ async function main() {
     const review = await fetch(`${list}/${scenario}/revisions/${row.n}/review`, {
       method: "POST",
       headers: { cookie, "content-type": "application/json" },
-      body: JSON.stringify({ action: "request", note: "while the mail server is down" }),
+      body: JSON.stringify({
+        action: "request",
+        note: "while the mail server is down",
+        reviewers: [seed.reviewerId],
+      }),
     });
     const answer = await review.json();
     check(

@@ -14,6 +14,8 @@ export interface LoadSeed {
   cookies: string[];
   /** One scenario per client, so concurrent saves race nobody but the fault being injected. */
   scenarioIds: string[];
+  /** The team's one reviewer, whom review requests are asked of. */
+  reviewerId: string;
 }
 
 /**
@@ -51,5 +53,10 @@ export async function seedLoad(db: Db, clients: number): Promise<LoadSeed> {
   const cookies: string[] = [];
   for (const id of editors)
     cookies.push(`${SESSION_COOKIE}=${(await createSessionToken(lucia, id)).token}`);
-  return { teamSlug: slug, cookies, scenarioIds: editors.map((id) => byAuthor.get(id)!) };
+  return {
+    teamSlug: slug,
+    cookies,
+    scenarioIds: editors.map((id) => byAuthor.get(id)!),
+    reviewerId: reviewer,
+  };
 }

@@ -126,9 +126,17 @@ describe("hand-off to the simulation team", () => {
     const zip = await JSZip.loadAsync(await bundle.arrayBuffer());
     expect(zip.file("reference-bundle/README.txt")).not.toBeNull();
 
-    // Review: the editor asks, a reviewer approves.
+    // Review: the editor asks the reviewer (her id as the review form lists it), she approves.
+    await ed.goto(`/teams/${TEAM}/scenarios/${scenarioId}`);
+    const reviewerId = await ed
+      .getByRole("checkbox", { name: "Rita Reviewer (invented)" })
+      .getAttribute("value");
     expect(
-      (await ed.request.post(`/api/v1${rev}/review`, { data: { action: "request" } })).status(),
+      (
+        await ed.request.post(`/api/v1${rev}/review`, {
+          data: { action: "request", reviewers: [reviewerId] },
+        })
+      ).status(),
     ).toBe(200);
     const rv = await (await newContext(browser)).newPage();
     await signIn(rv, reviewer);

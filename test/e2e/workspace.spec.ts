@@ -86,6 +86,7 @@ describe("team workspace: revisions, review, share link", () => {
     await ed.getByRole("button", { name: "Save new revision" }).click();
     await eventually(() => revisionLine(ed)).toContain("Revision 2 of 2");
     await eventually(() => ed.getByTestId("revision-diff").textContent()).toContain("Y0_1");
+    await ed.getByRole("checkbox", { name: "Rita Reviewer (invented)" }).check();
     await ed.getByRole("button", { name: "Request review" }).click();
     await eventually(() =>
       ed.locator("#review-title ~ div [data-testid=review-state]").textContent(),

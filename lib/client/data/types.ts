@@ -25,6 +25,7 @@ export type { ParameterSetListResponse } from "@/lib/server/workspace/parameter-
 export type { ParameterSetView } from "@/db/queries/parameter-sets";
 export type { AuditLogResponse } from "@/lib/server/workspace/audit-log";
 export type { PersonRef } from "@/db/queries/users-view";
+export type { ReviewActionInput } from "@/lib/shared/validations/workspace";
 
 export type ReviewState = "draft" | "in_review" | "approved" | "changes_requested";
 export type ReviewAction = "request" | "approve" | "request-changes";

@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { apiFetch } from "./api-fetch";
 import { teamApi } from "./api-urls";
 import { workspaceKeys } from "./query-keys";
-import type { ReviewAction, ReviewActionResponse, ReviewHistoryResponse } from "./types";
+import type { ReviewActionInput, ReviewActionResponse, ReviewHistoryResponse } from "./types";
 
 export function useReview(slug: string, scenarioId: string, number: number) {
   return useQuery({
@@ -18,7 +18,7 @@ export function useReview(slug: string, scenarioId: string, number: number) {
 export function useReviewAction(slug: string, scenarioId: string, number: number) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: { action: ReviewAction; note: string }) =>
+    mutationFn: (input: ReviewActionInput) =>
       apiFetch<ReviewActionResponse>(teamApi(slug).review(scenarioId, number), {
         method: "POST",
         body: input,

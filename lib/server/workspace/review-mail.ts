@@ -1,7 +1,7 @@
 import "server-only";
 
 import type { Db } from "@/db/client";
-import { reviewRecipients } from "@/db/queries/review-recipients";
+import { chosenReviewerRecipients, reviewRecipients } from "@/db/queries/review-recipients";
 import type { ReviewState } from "@/db/schema/scenarios";
 import { reviewRequestedMessage, reviewVerdictMessage } from "@/lib/server/email/templates/review";
 import { linkTo, type MailDeps } from "@/lib/shared/mail-types";
@@ -16,6 +16,8 @@ export interface ReviewMailContext {
   to: ReviewState;
   /** Who asked for the review: told about the verdict even without editing the scenario. */
   requesterId?: string | null;
+  /** On a request: the reviewers it is asked of, the only people mailed about it. */
+  chosenReviewers?: string[];
 }
 
 /**
@@ -24,13 +26,18 @@ export interface ReviewMailContext {
  */
 export async function sendReviewMail(db: Db, deps: MailDeps, ctx: ReviewMailContext) {
   const requested = ctx.to === "in_review";
-  const people = await reviewRecipients(db, {
-    teamId: ctx.team.id,
-    scenarioId: ctx.scenario.id,
-    includeReviewers: requested,
-    extra: ctx.requesterId ? [ctx.requesterId] : [],
-    actorId: ctx.actorId,
-  });
+  const people = requested
+    ? await chosenReviewerRecipients(db, {
+        teamId: ctx.team.id,
+        chosen: ctx.chosenReviewers ?? [],
+        actorId: ctx.actorId,
+      })
+    : await reviewRecipients(db, {
+        teamId: ctx.team.id,
+        scenarioId: ctx.scenario.id,
+        extra: ctx.requesterId ? [ctx.requesterId] : [],
+        actorId: ctx.actorId,
+      });
   const url = linkTo(
     deps.appUrl,
     `/teams/${ctx.team.slug}/scenarios/${ctx.scenario.id}?rev=${ctx.revision}`,

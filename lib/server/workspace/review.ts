@@ -23,6 +23,7 @@ import { authorizeTeam } from "@/lib/server/access/team-access";
 import { reviewActionSchema } from "@/lib/shared/validations/workspace";
 
 import { parseWithPath } from "./parse";
+import { checkChosenReviewers } from "./chosen-reviewers";
 import { sendReviewMail } from "./review-mail";
 import { revisionInTeam } from "../access/scope";
 
@@ -97,6 +98,10 @@ export async function changeReview(
     `Revision ${revision.number} is ${STATE_WORDS[revision.reviewState]}; it cannot be ${data.action === "request" ? "sent for review" : "judged"} now.`,
   );
   if (!step.from.includes(revision.reviewState)) throw refused;
+  const chosenReviewers =
+    data.action === "request"
+      ? await checkChosenReviewers(db, ctx.team.id, ctx.actor.id, data.reviewers)
+      : [];
   const now = new Date();
   const requesterId = await db.transaction(async (tx) => {
     const moved = await moveReviewState(tx, revision.id, revision.reviewState, {
@@ -117,13 +122,19 @@ export async function changeReview(
       actorId: ctx.actor.id,
       note: data.note,
       at: now,
+      chosenReviewers,
     });
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
       action: `review.${data.action}`,
       target: scenario.id,
-      detail: { revision: revision.number, from: revision.reviewState, to: step.to },
+      detail: {
+        revision: revision.number,
+        from: revision.reviewState,
+        to: step.to,
+        ...(chosenReviewers.length ? { reviewers: chosenReviewers } : {}),
+      },
     });
     return lastRequest?.actorId ?? null;
   });
@@ -136,6 +147,7 @@ export async function changeReview(
     note: data.note,
     to: step.to,
     requesterId,
+    chosenReviewers,
   });
   return {
     ...(await reviewHistory(db, actor, teamSlug, scenario.id, revision.number)),

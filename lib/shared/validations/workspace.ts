@@ -82,10 +82,25 @@ export const editCommentSchema = z.object({
   body: shortText(5000, "comment").min(1, "Write something first."),
 });
 
-export const reviewActionSchema = z.object({
-  action: z.enum(["request", "approve", "request-changes"], "Unknown review action."),
-  note: shortText(2000, "note").default(""),
-});
+const reviewNoteSchema = shortText(2000, "note").default("");
+
+// A request names whom it is asked of: at least one of the team's reviewers or owners (the
+// service checks membership and role; the ids here are only checked to be ids).
+export const reviewActionSchema = z.discriminatedUnion(
+  "action",
+  [
+    z.object({
+      action: z.literal("request"),
+      note: reviewNoteSchema,
+      reviewers: z
+        .array(z.uuid("Choose reviewers from the team's list."), "Choose at least one reviewer.")
+        .min(1, "Choose at least one reviewer.")
+        .max(100, "Choose at most 100 reviewers."),
+    }),
+    z.object({ action: z.enum(["approve", "request-changes"]), note: reviewNoteSchema }),
+  ],
+  "Unknown review action.",
+);
 export type ReviewActionInput = z.input<typeof reviewActionSchema>;
 
 export const createShareLinkSchema = z.object({

@@ -101,6 +101,7 @@ const plausibleBody = fc.record(
     baseRevision: fc.oneof(fc.integer(), fc.double(), text),
     file: fc.oneof(mutatedFile, fc.jsonValue({ maxDepth: 2 })),
     action: fc.oneof(fc.constantFrom("request", "approve", "request-changes"), text),
+    reviewers: fc.oneof(fc.array(fc.uuid(), { maxLength: 3 }), fc.jsonValue({ maxDepth: 1 })),
     values: fc.jsonValue({ maxDepth: 2 }),
     tags: fc.array(text, { maxLength: 5 }),
     expiresInDays: fc.oneof(fc.integer(), text),

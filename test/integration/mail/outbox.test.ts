@@ -91,11 +91,12 @@ describe("mail outbox", () => {
       w.slug,
       w.scenarioId,
       1,
-      { action: "request", note: "" },
+      { action: "request", note: "", reviewers: [w.members.reviewer.id, w.members.owner.id] },
       deps,
     );
     expect(review.notified).toBe(0);
-    // The reviewer and the owner; the editor who asked is not mailed about their own request.
+    // The two chosen, the reviewer and the owner; the editor who asked is not mailed about their
+    // own request.
     expect(review.mailQueued).toBe(2);
     const queued = await db
       .select()

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { listAwaitingReview } from "@/db/queries/awaiting-review";
+import { listReviewerChoices } from "@/db/queries/team-reviewers";
 import { memberships } from "@/db/schema/teams";
 import { changeReview } from "@/lib/server/workspace/review";
 import { saveRevision } from "@/lib/server/workspace/revisions";
@@ -10,14 +11,18 @@ import { demoFileWith, makeWorld } from "../support/workspace";
 
 const db = openTestDb();
 
-function request(w: Awaited<ReturnType<typeof makeWorld>>, who: "editor" | "owner", n: number) {
+type World = Awaited<ReturnType<typeof makeWorld>>;
+
+/** Asks every reviewer and owner of the team but the requester (the choice the form offers). */
+async function request(w: World, who: "editor" | "owner", n: number) {
+  const everyone = await listReviewerChoices(db, w.teamId, w.members[who].id);
   return changeReview(
     db,
     w.members[who],
     w.slug,
     w.scenarioId,
     n,
-    { action: "request" },
+    { action: "request", reviewers: everyone.map((p) => p.id) },
     recordingMailer(),
   );
 }

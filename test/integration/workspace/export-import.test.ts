@@ -44,7 +44,7 @@ async function richWorld(): Promise<World> {
     w.slug,
     w.scenarioId,
     2,
-    { action: "request", note: "ready" },
+    { action: "request", note: "ready", reviewers: [reviewer.id] },
     mail,
   );
   await changeReview(
@@ -78,7 +78,15 @@ async function richWorld(): Promise<World> {
     message: "first",
     file: demoFileWith(9000),
   });
-  await changeReview(db, owner, w.slug, second.scenario.id, 1, { action: "request" }, mail);
+  await changeReview(
+    db,
+    owner,
+    w.slug,
+    second.scenario.id,
+    1,
+    { action: "request", reviewers: [reviewer.id] },
+    mail,
+  );
   await changeReview(db, reviewer, w.slug, second.scenario.id, 1, { action: "approve" }, mail);
   const fitted = await createParameterSet(db, editor, w.slug, {
     name: "Fitted PA6",

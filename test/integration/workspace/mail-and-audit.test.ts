@@ -34,7 +34,7 @@ describe("review mail through the real transport", () => {
         method: "POST",
         params,
         cookie: await cookieFor(db, w.members.editor),
-        body: { action: "request" },
+        body: { action: "request", reviewers: [w.members.reviewer.id] },
       });
       expect(ask.status).toBe(200);
       const verdict = await callRoute(reviewRoute.POST, {
@@ -68,7 +68,7 @@ describe("audit trail", () => {
       w.slug,
       w.scenarioId,
       2,
-      { action: "request" },
+      { action: "request", reviewers: [reviewer.id] },
       recordingMailer(),
     );
     await changeReview(

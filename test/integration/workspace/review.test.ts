@@ -11,7 +11,7 @@ import { memberships } from "@/db/schema/teams";
 const db = openTestDb();
 
 describe("review: draft → in review → approved | changes requested, with e-mail", () => {
-  it("mails the reviewers and the other editors on request (never the requester), and the editors on a verdict", async () => {
+  it("mails the chosen reviewer only on request (never the requester, not the owner left out), and the editors on a verdict", async () => {
     const w = await makeWorld(db);
     // A second editor who never touched this scenario hears nothing.
     const bystander = await makeUser(db, { name: "Bystander" });
@@ -29,17 +29,20 @@ describe("review: draft → in review → approved | changes requested, with e-m
       w.slug,
       w.scenarioId,
       2,
-      { action: "request", note: "please check b" },
+      { action: "request", note: "please check b", reviewers: [w.members.reviewer.id] },
       mail,
     );
     expect(requested.revision.review).toMatchObject({
       state: "in_review",
       by: { id: w.members.editor.id },
     });
-    const toOnRequest = mail.sent.map((m) => m.to).sort();
-    // The requester (the editor) is not mailed about their own request.
-    expect(toOnRequest).toEqual([w.members.owner.email, w.members.reviewer.email].sort());
-    expect(requested.notified).toBe(2);
+    // Only the chosen reviewer: not the requester (the editor), not the owner, who edited the
+    // scenario and gives verdicts too but was not chosen.
+    expect(mail.sent.map((m) => m.to)).toEqual([w.members.reviewer.email]);
+    expect(requested.notified).toBe(1);
+    expect(requested.history.at(-1)?.askedOf).toEqual([
+      { id: w.members.reviewer.id, name: w.members.reviewer.name },
+    ]);
     expect(mail.sent[0].subject).toMatch(/^Review requested: ".+", revision 2$/);
     expect(mail.sent[0].text).toContain("please check b");
     expect(mail.sent[0].text).toContain(
@@ -65,16 +68,19 @@ describe("review: draft → in review → approved | changes requested, with e-m
       false,
     );
 
-    // Asked again after changes, then approved: the full history is kept in order.
+    // Asked again after changes, of the owner this time, then approved: the full history is
+    // kept in order, each request with whom it was asked of.
+    mail.sent.length = 0;
     await changeReview(
       db,
       w.members.editor,
       w.slug,
       w.scenarioId,
       2,
-      { action: "request" },
-      recordingMailer(),
+      { action: "request", reviewers: [w.members.owner.id] },
+      mail,
     );
+    expect(mail.sent.map((m) => m.to)).toEqual([w.members.owner.email]);
     mail.sent.length = 0;
     await changeReview(db, w.members.owner, w.slug, w.scenarioId, 2, { action: "approve" }, mail);
     expect(mail.sent[0].subject).toMatch(/^Approved:/);
@@ -88,7 +94,14 @@ describe("review: draft → in review → approved | changes requested, with e-m
     expect(history.history[1]).toMatchObject({
       actor: { id: w.members.reviewer.id },
       note: "b too high",
+      askedOf: [],
     });
+    expect(history.history.map((e) => e.askedOf.map((p) => p.id))).toEqual([
+      [w.members.reviewer.id],
+      [],
+      [w.members.owner.id],
+      [],
+    ]);
     expect(history.revision.review).toMatchObject({
       state: "approved",
       by: { id: w.members.owner.id },
@@ -99,7 +112,17 @@ describe("review: draft → in review → approved | changes requested, with e-m
     const w = await makeWorld(db);
     const mail = recordingMailer();
     const review = (who: keyof typeof w.members, action: string) =>
-      outcome(changeReview(db, w.members[who], w.slug, w.scenarioId, 1, { action }, mail));
+      outcome(
+        changeReview(
+          db,
+          w.members[who],
+          w.slug,
+          w.scenarioId,
+          1,
+          action === "request" ? { action, reviewers: [w.members.reviewer.id] } : { action },
+          mail,
+        ),
+      );
     expect(await review("reviewer", "approve")).toBe("conflict:review");
     expect(await review("reviewer", "request")).toBe("forbidden:review");
     expect(await review("editor", "request")).toBe(null);
@@ -120,7 +143,7 @@ describe("review: draft → in review → approved | changes requested, with e-m
       w.slug,
       w.scenarioId,
       1,
-      { action: "request" },
+      { action: "request", reviewers: [w.members.reviewer.id] },
       recordingMailer(),
     );
     const results = await Promise.all([
@@ -171,7 +194,7 @@ describe("review: draft → in review → approved | changes requested, with e-m
         w.slug,
         w.scenarioId,
         1,
-        { action: "request" },
+        { action: "request", reviewers: [w.members.reviewer.id] },
         broken,
       );
       expect(result.notified).toBe(0);

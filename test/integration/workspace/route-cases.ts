@@ -151,7 +151,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     method: "POST",
     allowed: EDITORS,
     params: r,
-    body: () => ({ action: "request" }),
+    body: (w) => ({ action: "request", reviewers: [w.members.reviewer.id] }),
     happened: async (db, w) => (await revisionOne(db, w)).reviewState === "in_review",
   },
   "POST review approve": {
@@ -167,7 +167,7 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
         w.slug,
         w.scenarioId,
         1,
-        { action: "request" },
+        { action: "request", reviewers: [w.members.reviewer.id] },
         recordingMailer(),
       );
     },

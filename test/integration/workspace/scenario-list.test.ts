@@ -29,7 +29,7 @@ describe("the scenarios list", () => {
       w.slug,
       b.scenario.id,
       1,
-      { action: "request" },
+      { action: "request", reviewers: [w.members.reviewer.id] },
       recordingMailer(),
     );
     await saveRevision(db, owner, w.slug, c.scenario.id, {
@@ -87,7 +87,15 @@ describe("the scenarios list", () => {
     const mail = recordingMailer();
     const state = async () =>
       (await listScenarios(db, editor, w.slug, {})).items[0].latestRevision.reviewState;
-    await changeReview(db, editor, w.slug, w.scenarioId, 1, { action: "request" }, mail);
+    await changeReview(
+      db,
+      editor,
+      w.slug,
+      w.scenarioId,
+      1,
+      { action: "request", reviewers: [reviewer.id] },
+      mail,
+    );
     expect(await state()).toBe("in_review");
     await saveRevision(db, editor, w.slug, w.scenarioId, {
       baseRevision: 1,
@@ -96,7 +104,15 @@ describe("the scenarios list", () => {
     expect(await state()).toBe("draft");
     await changeReview(db, reviewer, w.slug, w.scenarioId, 1, { action: "approve" }, mail);
     expect(await state()).toBe("draft");
-    await changeReview(db, editor, w.slug, w.scenarioId, 2, { action: "request" }, mail);
+    await changeReview(
+      db,
+      editor,
+      w.slug,
+      w.scenarioId,
+      2,
+      { action: "request", reviewers: [reviewer.id] },
+      mail,
+    );
     await changeReview(db, reviewer, w.slug, w.scenarioId, 2, { action: "request-changes" }, mail);
     expect(await state()).toBe("changes_requested");
     expect((await listScenarios(db, editor, w.slug, { review: "changes_requested" })).total).toBe(

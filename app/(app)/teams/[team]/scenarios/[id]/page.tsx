@@ -11,6 +11,7 @@ import { ScenarioHeader } from "@/components/scenarios/scenario-header";
 import { ShareLinksPanel } from "@/components/share/share-links-panel";
 import { getDb } from "@/db/index";
 import { findLatestConformanceVerdict } from "@/db/queries/conformance-checks";
+import { listReviewerChoices } from "@/db/queries/team-reviewers";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { can } from "@/lib/shared/permissions";
 import { getActor } from "@/lib/server/accounts/auth/session";
@@ -38,9 +39,11 @@ export default async function ScenarioPage({
   const db = getDb();
   const data = await loadScenarioPage(db, ctx.team.id, id, rev, overlay);
   const { summary, number, meta, current, other } = data;
-  const [actor, latestCheck] = await Promise.all([
+  const mayRequest = can(ctx.role, "scenario:edit");
+  const [actor, latestCheck, reviewerChoices] = await Promise.all([
     getActor(),
     findLatestConformanceVerdict(db, ctx.team.id, summary.id, number),
+    mayRequest ? listReviewerChoices(db, ctx.team.id, ctx.actor.id) : [],
   ]);
   const latest = summary.latestRevision.number;
   const editable = can(ctx.role, "scenario:edit") && number === latest && !other;
@@ -121,7 +124,8 @@ export default async function ScenarioPage({
           scenarioId={summary.id}
           number={number}
           me={actor ? { id: actor.id, name: actor.name } : { id: "", name: "you" }}
-          canRequest={can(ctx.role, "scenario:edit")}
+          canRequest={mayRequest}
+          reviewerChoices={reviewerChoices}
           canJudge={can(ctx.role, "review:verdict")}
           canComment={can(ctx.role, "comment:write")}
           maxIncrement={current.scenario.path.legs.reduce((n, l) => n + l.increments, 0)}

@@ -11,8 +11,9 @@ export const GET = apiRoute<Params>(({ db, actor, params }) =>
 );
 
 /**
- * body ReviewActionInput { action: request | approve | request-changes, note? }:
- * request needs scenario:edit, verdicts need review:verdict → ReviewActionResponse.
+ * body ReviewActionInput { action: request | approve | request-changes, note?, reviewers }:
+ * request needs scenario:edit and `reviewers` (required: ids of the team's reviewers or owners,
+ * not the requester), verdicts need review:verdict → ReviewActionResponse.
  */
 export const POST = apiRoute<Params>(async ({ db, actor, params, request }) =>
   changeReview(

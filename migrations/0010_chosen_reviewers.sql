@@ -1,0 +1,1 @@
+ALTER TABLE "review_events" ADD COLUMN "chosen_reviewers" uuid[] DEFAULT '{}' NOT NULL;
