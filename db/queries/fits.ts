@@ -25,6 +25,7 @@ function fitQuery(db: Executor) {
       reports: fits.reports,
       residuals: fits.residuals,
       warnings: fits.warnings,
+      uncertainty: fits.uncertainty,
       parameterSetId: fits.parameterSetId,
       parameterSetName: parameterSets.name,
       createdBy: personRef(users.id, users.name),

@@ -2,6 +2,7 @@ import { index, jsonb, pgTable, text, timestamp, uuid } from "drizzle-orm/pg-cor
 
 import type { RecordReport } from "@/lib/calibration/identify";
 import type { RecordResidual } from "@/lib/calibration/refine";
+import type { FitUncertainty } from "@/lib/calibration/uncertainty";
 import type { MaterialParams } from "@/lib/mechanics/types";
 
 import { parameterSets } from "./parameter-sets";
@@ -25,6 +26,8 @@ export const fits = pgTable(
     reports: jsonb("reports").$type<RecordReport[]>().notNull().default([]),
     residuals: jsonb("residuals").$type<RecordResidual[]>().notNull().default([]),
     warnings: jsonb("warnings").$type<string[]>().notNull().default([]),
+    /** standard errors, 95 % intervals, correlations of a refinement's free values; null otherwise */
+    uncertainty: jsonb("uncertainty").$type<FitUncertainty>(),
     parameterSetId: uuid("parameter_set_id").references(() => parameterSets.id, {
       onDelete: "set null",
     }),

@@ -4,6 +4,8 @@ import type { Db } from "@/db/client";
 import { insertFit } from "@/db/queries/fits";
 import type { RecordReport } from "@/lib/calibration/identify";
 import type { RecordResidual } from "@/lib/calibration/refine";
+import type { Bounds } from "@/lib/calibration/refine-params";
+import type { FitUncertainty } from "@/lib/calibration/uncertainty";
 import { planRefinement, refineWarnings } from "@/lib/calibration/refine-plan";
 import { canReplay } from "@/lib/calibration/replay";
 import type { Actor } from "@/lib/server/accounts/actor";
@@ -19,6 +21,7 @@ import { parseWithPath } from "@/lib/server/workspace/parse";
 import { saveFitSchema } from "./fit-schema";
 import { runIdentify } from "./identify-records";
 import { loadRecordsForFit, type LoadedRecord } from "./load-records";
+import { fitUncertaintyOf } from "./fit-uncertainty";
 import { replayResiduals } from "./replay-residuals";
 
 interface Outcome {
@@ -28,6 +31,7 @@ interface Outcome {
   warnings: string[];
   options: Record<string, unknown>;
   method: string;
+  uncertainty: FitUncertainty | null;
 }
 
 async function fitOutcome(
@@ -45,6 +49,7 @@ async function fitOutcome(
       warnings: result.warnings,
       options: { law: data.law, modulus: data.modulus, base: data.base ? "given" : "demo" },
       method: "identification from the loading loops (Theil–Sen threshold line)",
+      uncertainty: null,
     };
   }
   const params = toMaterialParams(data.params as ParameterSet);
@@ -52,10 +57,15 @@ async function fitOutcome(
   const inputs = records.map((r) => r.input);
   const used = inputs.filter((r) => canReplay(r.testType));
   const plan = planRefinement(used, params, data.free);
+  const [residuals, uncertainty] = await Promise.all([
+    replayResiduals(person, params, records),
+    fitUncertaintyOf(person, params, records, data.free, data.bounds as Bounds | undefined),
+  ]);
   return {
     params,
     reports: [],
-    residuals: await replayResiduals(person, params, records),
+    residuals,
+    uncertainty,
     warnings: refineWarnings(
       inputs.filter((r) => !canReplay(r.testType)),
       plan,
@@ -107,6 +117,7 @@ export async function saveFit(db: Db, actor: Actor, teamSlug: string, input: unk
       reports: out.reports,
       residuals: out.residuals,
       warnings: out.warnings,
+      uncertainty: out.uncertainty,
       parameterSetId: set.id,
       createdBy: ctx.actor.id,
     });

@@ -67,6 +67,7 @@ describe("identification on a 2,000-point record through the service", () => {
     expect(rms).toBeCloseTo(identified.records[0].validation!.rms, 9);
     const { fit, overlay } = await getFit(db, t.members.viewer, t.slug, saved.id);
     expect(fit.parameterSetName).toBe(name);
+    expect(fit.uncertainty).toBeNull(); // identification gives no intervals
     expect(overlay[0].computed?.y.length).toBe(overlay[0].measured.y.length);
   });
 
@@ -84,6 +85,13 @@ describe("identification on a 2,000-point record through the service", () => {
     // Issue 14: the plan is made again on the server from the stored 0° tension record.
     const { fit } = await getFit(db, t.members.viewer, t.slug, first.id);
     expect(fit.warnings).toEqual([]); // E1 ≠ E2: no tie; E1 is informed
+    // Issue 14 item 4: the uncertainty of the free value, worked out on the stored record
+    expect(fit.uncertainty?.params.map((p) => p.name)).toEqual(["E1"]);
+    const e1 = fit.uncertainty!.params[0];
+    expect(e1.value).toBe(11100);
+    expect(e1.se).toBeGreaterThan(0);
+    expect(e1.low!).toBeLessThan(11100);
+    expect(e1.high!).toBeGreaterThan(11100);
     const kept = await saveFit(db, t.members.owner, t.slug, {
       method: "refine",
       recordIds: [recordId],

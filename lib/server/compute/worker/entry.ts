@@ -4,6 +4,7 @@
  * not from the queue, runs the task, and sends expected errors as data: an AppError's class and
  * fields do not survive the thread boundary.
  */
+import { uncertaintyAt } from "@/lib/calibration/refine";
 import { replayError, canReplay } from "@/lib/calibration/replay";
 import { readCurveCsv } from "@/lib/csv/read-curve-csv";
 import { isAppError } from "@/lib/shared/errors";
@@ -48,6 +49,8 @@ function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
           const rms = Number.isFinite(squared) && n > 0 ? Math.sqrt(squared / n) : -1;
           return { id: r.id, rms, points: n };
         });
+    case "fit-uncertainty":
+      return uncertaintyAt(task.records, task.params, { free: task.free, bounds: task.bounds });
     case "read-curve-csv":
       return readCurveCsvInWorker(task);
   }

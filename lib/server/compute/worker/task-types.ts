@@ -4,7 +4,8 @@
  */
 import type { MessagePort } from "node:worker_threads";
 
-import type { RecordPoints } from "@/lib/calibration/types";
+import type { Bounds, FittableParam } from "@/lib/calibration/refine-params";
+import type { RecordPoints, TestRecordInput } from "@/lib/calibration/types";
 import type { CsvError } from "@/lib/csv/csv-error";
 import type { CurvePoints } from "@/lib/csv/extract-points";
 import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
@@ -30,6 +31,13 @@ export type ComputeTask =
       kind: "replay-residuals";
       params: MaterialParams;
       records: { id: string; input: { testType: TestType; points: RecordPoints } }[];
+    }
+  | {
+      kind: "fit-uncertainty";
+      params: MaterialParams;
+      records: TestRecordInput[];
+      free: FittableParam[];
+      bounds: Bounds | undefined;
     }
   | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined };
 

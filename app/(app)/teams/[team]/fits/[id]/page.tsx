@@ -6,6 +6,7 @@ import { DesignCaution } from "@/components/calibration/design-caution";
 import { FitOverlay } from "@/components/calibration/fit-overlay";
 import { LoopTable } from "@/components/calibration/loop-table";
 import { ParamsTable } from "@/components/calibration/params-table";
+import { UncertaintyTable } from "@/components/calibration/uncertainty-table";
 import { getDb } from "@/db/index";
 import { requireTeamRole } from "@/lib/server/access/guard";
 import { isAppError } from "@/lib/shared/errors";
@@ -78,6 +79,11 @@ export default async function FitPage({
           ))}
         </div>
       </div>
+      {fit.uncertainty ? (
+        <div className="mt-6">
+          <UncertaintyTable uncertainty={fit.uncertainty} />
+        </div>
+      ) : null}
       {fit.reports.map((r) =>
         r.loops.length > 0 ? (
           <div key={r.id} className="mt-6">
