@@ -40,7 +40,7 @@ export function SetDiffTable({ entries }: SetDiffTableProps) {
           </th>
           <th scope="col">{pick(a.set.id, setLeft, "First set to compare")}</th>
           <th scope="col">{pick(b.set.id, setRight, "Second set to compare")}</th>
-          <th scope="col" className="w-16 text-right">
+          <th scope="col" className="w-20 text-right">
             change
           </th>
         </tr>
@@ -54,9 +54,10 @@ export function SetDiffTable({ entries }: SetDiffTableProps) {
             <th scope="row" className="py-0.5 text-left font-normal">
               {r.symbol}
             </th>
-            <td className="font-mono">{r.left}</td>
-            <td className="font-mono">{r.right}</td>
-            <td className="text-right font-mono">
+            {/* Fitted values carry all their digits: wrap them inside the cell, never over the next. */}
+            <td className="break-all pr-1 font-mono">{r.left}</td>
+            <td className="break-all pr-1 font-mono">{r.right}</td>
+            <td className="whitespace-nowrap text-right font-mono">
               {r.differs
                 ? r.relative === null
                   ? "≠"

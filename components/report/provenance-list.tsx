@@ -13,7 +13,8 @@ export function ProvenanceList({ items }: { items: SetProvenance[] }) {
           {p.libraryName ? ` (team library: ${p.libraryName})` : ""}
           {p.method ? `, method ${p.method}` : ""}
           {p.fittedAt ? `, fitted ${p.fittedAt.slice(0, 10)}` : ""}
-          {p.note ? `. ${p.note}` : ""}
+          {/* The sentence's full stop comes after, so a note's own one is dropped (no "..") */}
+          {p.note ? `. ${p.note.replace(/\.\s*$/, "")}` : ""}
           {p.warnings.length > 0 ? (
             <ul className="mt-1 list-disc pl-5 text-xs text-amber-900">
               {p.warnings.map((w) => (
