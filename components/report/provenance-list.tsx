@@ -1,3 +1,4 @@
+import { UncertaintyTable } from "@/components/calibration/uncertainty-table";
 import type { SetProvenance } from "@/lib/server/handoff/report/provenance";
 
 const num = (x: number | null, unit = "") =>
@@ -44,6 +45,11 @@ export function ProvenanceList({ items }: { items: SetProvenance[] }) {
           ) : (
             <span className="text-ink-faint">. No test records are linked to this set.</span>
           )}
+          {p.uncertainty ? (
+            <div className="mt-2 break-inside-avoid">
+              <UncertaintyTable uncertainty={p.uncertainty} />
+            </div>
+          ) : null}
         </li>
       ))}
     </ul>

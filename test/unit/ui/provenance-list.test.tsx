@@ -2,6 +2,7 @@ import { cleanup, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it } from "vitest";
 
 import { ProvenanceList } from "@/components/report/provenance-list";
+import { fitUncertainty } from "@/lib/calibration/uncertainty";
 import type { SetProvenance } from "@/lib/server/handoff/report/provenance";
 
 // The report's provenance line of a typed library set: the seeded note ends with its own full
@@ -17,9 +18,24 @@ const typed: SetProvenance = {
   records: [],
   fittedAt: null,
   warnings: [],
+  uncertainty: null,
 };
 
 describe("ProvenanceList", () => {
+  it("prints a refinement's intervals beside its records (issue 14)", () => {
+    const uncertainty = fitUncertainty(
+      [0, 1, 2, 3, 4].map((x) => [1, x]),
+      [0.1, -0.1, 0.05, -0.05, 0],
+      ["E1", "a1"],
+      [1, 1],
+      [11000, 0.6],
+    );
+    render(<ProvenanceList items={[{ ...typed, kind: "fitted", uncertainty }]} />);
+    const text = screen.getByTestId("report-provenance").textContent ?? "";
+    expect(text).toContain("How sure the refined values are");
+    expect(text).toContain(uncertainty!.params[0].se!.toPrecision(2));
+  });
+
   it("keeps one full stop between a note and the no-records sentence", () => {
     render(<ProvenanceList items={[typed]} />);
     const text = screen.getByTestId("report-provenance").textContent ?? "";

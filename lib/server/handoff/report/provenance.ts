@@ -5,6 +5,7 @@ import "server-only";
  * (the set's label) or the same values, its provenance, and the fit that produced it with the
  * records it used and their RMS residuals. Pure, so the matching rules are tested directly.
  */
+import type { FitUncertainty } from "@/lib/calibration/uncertainty";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
 export interface LibrarySet {
@@ -21,6 +22,8 @@ export interface FitSummary {
   residuals: { id: string; rms: number; points: number }[];
   /** Stored with the fit (issue 14: isotropy tie, values not informed by these records). */
   warnings?: string[];
+  /** Stored with a refinement (issue 14): standard errors, intervals, correlations. */
+  uncertainty?: FitUncertainty | null;
   createdAt: string;
 }
 
@@ -33,6 +36,7 @@ export interface SetProvenance {
   records: { name: string; rms: number | null; points: number | null }[];
   fittedAt: string | null;
   warnings: string[];
+  uncertainty: FitUncertainty | null;
 }
 
 const NUMERIC = [
@@ -83,6 +87,7 @@ export function matchProvenance(
       }),
       fittedAt: fit?.createdAt ?? null,
       warnings: fit?.warnings ?? [],
+      uncertainty: fit?.uncertainty ?? null,
     };
   });
 }

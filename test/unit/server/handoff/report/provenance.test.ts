@@ -42,6 +42,13 @@ describe("report provenance", () => {
       recordIds: ["r1", "r2"],
       residuals: [{ id: "r1", rms: 1.25, points: 400 }],
       warnings: ["not informed by these records, kept at the start value: k6"],
+      uncertainty: {
+        level: 0.95,
+        degreesOfFreedom: 398,
+        residualSd: 0.01,
+        params: [{ name: "E1", value: 11000, se: 12, low: 10976, high: 11024 }],
+        correlation: [[1]],
+      },
       createdAt: "2026-11-30T10:00:00Z",
     },
   ];
@@ -60,6 +67,7 @@ describe("report provenance", () => {
       fittedAt: "2026-11-30T10:00:00Z",
       warnings: ["not informed by these records, kept at the start value: k6"], // issue 14
     });
+    expect(p.uncertainty?.params[0]).toMatchObject({ name: "E1", se: 12 }); // issue 14
     expect(p.records).toEqual([
       { name: "Tension 0°", rms: 1.25, points: 400 },
       { name: "Cyclic 90°", rms: null, points: null },
