@@ -5,6 +5,7 @@ import type { IdentifyResponse } from "@/lib/server/records/identify-records";
 import { LoopCharts } from "./loop-charts";
 import { LoopTable } from "./loop-table";
 import { ParamsTable } from "./params-table";
+import { testTypeWords } from "@/lib/csv/test-type-words";
 
 /** What the identification found: values, loops, the two line plots, R², warnings and notes. */
 export function IdentifyReport({ result }: { result: IdentifyResponse }) {
@@ -30,11 +31,14 @@ export function IdentifyReport({ result }: { result: IdentifyResponse }) {
       {result.records.map((r) =>
         r.loops.length === 0 ? (
           <p key={r.id} className="text-sm">
-            {result.recordNames[r.id]}: no loops found ({r.testType}).
+            {result.recordNames[r.id]}: no loops found ({testTypeWords(r.testType, true)}).
           </p>
         ) : (
           <div key={r.id} className="space-y-3">
-            <LoopTable loops={r.loops} caption={`${result.recordNames[r.id]} (${r.testType})`} />
+            <LoopTable
+              loops={r.loops}
+              caption={`${result.recordNames[r.id]} (${testTypeWords(r.testType, true)})`}
+            />
             <p className="text-sm" data-testid="threshold-r2">
               E0 = {r.E0?.toFixed(0) ?? "—"} MPa; threshold line R² ={" "}
               {r.thresholdR2 === null ? "—" : r.thresholdR2.toFixed(4)}

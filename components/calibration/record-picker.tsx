@@ -1,6 +1,7 @@
 "use client";
 
 import type { TestRecordSummary } from "@/db/queries/test-records";
+import { testTypeWords } from "@/lib/csv/test-type-words";
 
 /** Tick the records to calibrate from. */
 export function RecordPicker({
@@ -23,7 +24,8 @@ export function RecordPicker({
         <label key={r.id} className="flex items-center gap-2 text-sm">
           <input type="checkbox" checked={selected.includes(r.id)} onChange={() => toggle(r.id)} />
           <span>
-            {r.name} — {r.testType}, {r.loading}, {r.pointCount.toLocaleString("en")} points
+            {r.name} — {testTypeWords(r.testType, true)}, {r.loading},{" "}
+            {r.pointCount.toLocaleString("en")} points
           </span>
         </label>
       ))}

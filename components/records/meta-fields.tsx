@@ -5,18 +5,10 @@ import type { z } from "zod";
 
 import { Field } from "@/components/ui/field";
 import { TEST_TYPES, type testRecordMetaSchema } from "@/lib/csv/record-schema";
+import { TEST_TYPE_WORDS } from "@/lib/csv/test-type-words";
 
 export type MetaInput = z.input<typeof testRecordMetaSchema>;
 export type MetaOutput = z.output<typeof testRecordMetaSchema>;
-
-const TYPE_LABELS: Record<(typeof TEST_TYPES)[number], string> = {
-  "tension-1": "Tension along 1",
-  "tension-2": "Tension along 2",
-  "compression-1": "Compression along 1",
-  "shear-12": "In-plane shear 12",
-  biaxial: "Biaxial",
-  "transverse-after-damage-1": "Tension along 2 after damage along 1",
-};
 
 const optionalNumber = { setValueAs: (v: string) => (v === "" ? undefined : Number(v)) };
 
@@ -39,7 +31,7 @@ export function MetaFields({
         <select id={`${idPrefix}-type`} className={select} {...register("testType")}>
           {TEST_TYPES.map((t) => (
             <option key={t} value={t}>
-              {TYPE_LABELS[t]}
+              {TEST_TYPE_WORDS[t]}
             </option>
           ))}
         </select>

@@ -1,6 +1,7 @@
 import Link from "next/link";
 
 import type { TestRecordSummary } from "@/db/queries/test-records";
+import { testTypeWords } from "@/lib/csv/test-type-words";
 
 /** A team's test records: name, type, specimen, points, author, date. */
 export function RecordsTable({ slug, items }: { slug: string; items: TestRecordSummary[] }) {
@@ -32,7 +33,7 @@ export function RecordsTable({ slug, items }: { slug: string; items: TestRecordS
                 </Link>
               </td>
               <td className="py-2 pr-3">
-                {r.testType}, {r.loading}
+                {testTypeWords(r.testType)}, {r.loading}
               </td>
               <td className="py-2 pr-3">{r.specimenId}</td>
               <td className="py-2 pr-3 text-right tabular-nums">

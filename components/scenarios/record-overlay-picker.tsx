@@ -4,6 +4,7 @@ import { overlayAxesOf } from "@/lib/client/loading-desk/record-overlay";
 import { messageOf } from "@/lib/client/data/api-fetch";
 import { useTestRecords } from "@/lib/client/data/use-test-records";
 import { STRAIN_LABEL, STRESS_LABEL } from "@/lib/client/loading-desk/chart-defs";
+import { testTypeWords } from "@/lib/csv/test-type-words";
 
 export interface RecordOverlayPickerProps {
   slug: string;
@@ -62,7 +63,7 @@ export function RecordOverlayPicker({
                   onChange={() => toggle(r.id)}
                 />
                 <span>
-                  {r.name} — {r.testType}, {r.loading}
+                  {r.name} — {testTypeWords(r.testType, true)}, {r.loading}
                   {axes
                     ? ` · ${STRESS_LABEL[axes.y]} against ${STRAIN_LABEL[axes.x]}`
                     : " · no single stress–strain pair to draw"}
