@@ -39,8 +39,8 @@ export function chartLayout(def: ChartDef, empty = false) {
     legend: { orientation: "h" as const, y: -0.22, font: { ...FONT, size: 10 } },
     xaxis: { ...AXIS, title: { text: def.xTitle, standoff: 4 }, visible: !empty },
     yaxis: { ...AXIS, title: { text: def.yTitle, standoff: 4 }, visible: !empty },
-    // keep zoom while the data grows
-    uirevision: def.key,
+    // keep zoom while the data grows; a new horizontal axis starts at the full extent
+    uirevision: `${def.key}:${def.xAxis}`,
   };
 }
 

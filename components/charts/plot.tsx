@@ -54,3 +54,17 @@ export async function saveChartImage(
   link.download = `${filename}.${format}`;
   link.click();
 }
+
+/** Back to the full extent of the data after a drag-zoom (what double-click does). */
+export async function resetChartZoom(graphDiv: HTMLElement): Promise<void> {
+  const Plotly = await loadPlotly();
+  // dotted attribute names are Plotly's relayout form; its types know only the nested one
+  const fit = { "xaxis.autorange": true, "yaxis.autorange": true } as Record<string, unknown>;
+  await Plotly.relayout(graphDiv, fit as Parameters<typeof Plotly.relayout>[1]);
+}
+
+/** Redraws a chart at its box's new size (enlarged or back in the grid). */
+export async function fitChartToBox(graphDiv: HTMLElement): Promise<void> {
+  const Plotly = await loadPlotly();
+  await Plotly.Plots.resize(graphDiv);
+}

@@ -1,6 +1,6 @@
 "use client";
 
-import { useMemo, useRef } from "react";
+import { useEffect, useId, useMemo, useRef } from "react";
 import type { ChartDef } from "@/lib/client/loading-desk/chart-defs";
 import { type ChartOverlay, overlayTraces } from "@/lib/client/loading-desk/chart-overlays";
 import { buildChart, type TraceSource } from "@/lib/client/loading-desk/chart-traces";
@@ -9,11 +9,15 @@ import { imageStamp, stampedLayout } from "@/lib/client/loading-desk/image-stamp
 import { emitEvent } from "@/lib/client/loading-desk/instrumentation";
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import type { SetEntry } from "@/lib/client/loading-desk/set-list";
-import { Plot, saveChartImage } from "./plot";
+import { fitChartToBox, Plot, resetChartZoom, saveChartImage } from "./plot";
 import { chartLayout, CHART_CONFIG } from "./chart-layout";
 import { useDrawVersion } from "./use-draw-version";
+import { useEnlarged } from "./use-enlarged";
 
 const NO_OVERLAYS: readonly ChartOverlay[] = [];
+
+const buttonCls =
+  "rounded border border-glaze-line px-2 py-0.5 text-xs text-ink-soft hover:bg-glaze-deep";
 
 export interface ResultChartProps {
   def: ChartDef;
@@ -43,6 +47,14 @@ export function ResultChart({
 }: ResultChartProps) {
   const version = useDrawVersion(store);
   const graph = useRef<HTMLElement | null>(null);
+  const box = useRef<HTMLElement | null>(null);
+  const opener = useRef<HTMLButtonElement | null>(null);
+  const headingId = useId();
+  const { enlarged, toggle, close, onKeyDown } = useEnlarged(box, opener);
+  // The plot's box changed size with the dialog: Plotly only follows window resizes itself.
+  useEffect(() => {
+    if (graph.current) void fitChartToBox(graph.current);
+  }, [enlarged]);
   // Only what is drawn of each set: a parameter edit must not redraw the old curves at once;
   // the new rows arrive through the store and redraw one chart per task.
   const look = JSON.stringify(entries.map((e) => [e.set.id, e.color, e.visible, e.set.label]));
@@ -96,43 +108,80 @@ export function ResultChart({
   };
 
   return (
-    <figure
-      className="flex min-w-0 flex-col rounded-lg border border-glaze-line bg-white p-3"
-      data-chart={def.key}
-    >
-      <figcaption className="flex flex-wrap items-center gap-2">
-        <h3 className="font-display text-sm font-semibold">{def.title}</h3>
-        {controls}
-        <span className="ml-auto flex gap-1">
-          {(["png", "svg"] as const).map((f) => (
+    <>
+      {enlarged && (
+        <div className="fixed inset-0 z-40 bg-ink/40" aria-hidden="true" onClick={close} />
+      )}
+      <figure
+        ref={box}
+        className={
+          enlarged
+            ? "fixed inset-2 z-50 flex min-w-0 flex-col rounded-lg border border-glaze-line bg-white p-3 shadow-xl sm:inset-6"
+            : "flex min-w-0 flex-col rounded-lg border border-glaze-line bg-white p-3"
+        }
+        data-chart={def.key}
+        data-enlarged={enlarged ? "true" : undefined}
+        role={enlarged ? "dialog" : undefined}
+        aria-modal={enlarged ? true : undefined}
+        aria-labelledby={headingId}
+        onKeyDown={onKeyDown}
+      >
+        <figcaption className="flex flex-wrap items-center gap-2">
+          <h3 id={headingId} className="font-display text-sm font-semibold">
+            {def.title}
+          </h3>
+          {controls}
+          <span className="ml-auto flex flex-wrap gap-1">
             <button
-              key={f}
               type="button"
-              onClick={() => save(f)}
-              className="rounded border border-glaze-line px-2 py-0.5 text-xs text-ink-soft hover:bg-glaze-deep"
-              aria-label={`Save ${def.title} as ${f.toUpperCase()}`}
+              onClick={() => graph.current && void resetChartZoom(graph.current)}
+              className={buttonCls}
+              aria-label={`Reset zoom of ${def.title}`}
             >
-              {f.toUpperCase()}
+              Reset
             </button>
-          ))}
-        </span>
-      </figcaption>
-      <div className="h-64 w-full">
-        <Plot
-          data={data}
-          layout={layout}
-          config={CHART_CONFIG}
-          useResizeHandler
-          style={{ width: "100%", height: "100%" }}
-          onInitialized={drawn}
-          onUpdate={drawn}
-          onClick={(e: { points?: { curveNumber: number; pointIndex: number }[] }) => {
-            const p = e.points?.[0];
-            const rows = p ? built.rowsOf[p.curveNumber] : undefined;
-            if (p && rows) onCursor(rows[p.pointIndex]);
-          }}
-        />
-      </div>
-    </figure>
+            {(["png", "svg"] as const).map((f) => (
+              <button
+                key={f}
+                type="button"
+                onClick={() => save(f)}
+                className={buttonCls}
+                aria-label={`Save ${def.title} as ${f.toUpperCase()}`}
+              >
+                {f.toUpperCase()}
+              </button>
+            ))}
+            <button
+              ref={opener}
+              type="button"
+              onClick={toggle}
+              className={buttonCls}
+              aria-label={enlarged ? `Close enlarged ${def.title}` : `Enlarge ${def.title}`}
+            >
+              {enlarged ? "Close" : "Enlarge"}
+            </button>
+          </span>
+        </figcaption>
+        <div className={enlarged ? "min-h-0 w-full flex-1" : "h-64 w-full"}>
+          <Plot
+            data={data}
+            layout={layout}
+            config={CHART_CONFIG}
+            useResizeHandler
+            style={{ width: "100%", height: "100%" }}
+            onInitialized={drawn}
+            onUpdate={drawn}
+            onClick={(e: { points?: { curveNumber: number; pointIndex: number }[] }) => {
+              const p = e.points?.[0];
+              const rows = p ? built.rowsOf[p.curveNumber] : undefined;
+              if (p && rows) onCursor(rows[p.pointIndex]);
+            }}
+          />
+        </div>
+        <p className="mt-1 text-[11px] text-ink-faint">
+          Drag to zoom · double-click or Reset to fit · hover a curve for its values
+        </p>
+      </figure>
+    </>
   );
 }

@@ -11,6 +11,7 @@ import {
   stressStrainDef,
 } from "@/lib/client/loading-desk/chart-defs";
 import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
+import { withXAxis, type XAxisChoice } from "@/lib/client/loading-desk/chart-x-axis";
 import {
   setIncrementCursor,
   useIncrementCursor,
@@ -18,6 +19,7 @@ import {
 import type { ResultsStore } from "@/lib/client/loading-desk/results-store";
 import type { SetEntry } from "@/lib/client/loading-desk/set-list";
 import { IncrementCursor } from "./increment-cursor";
+import { XAxisSelect } from "./x-axis-select";
 
 export interface ChartGridProps {
   store: ResultsStore;
@@ -42,10 +44,17 @@ export function ChartGrid({
 }: ChartGridProps) {
   const [x, setX] = useState<StrainComponent>("eps11");
   const [y, setY] = useState<StressComponent>("sig11");
+  // Each fixed chart's horizontal axis by chart key; absent = the chart's default.
+  const [xOf, setXOf] = useState<Record<string, XAxisChoice>>({});
   const [cursor, setCursor] = useIncrementCursor();
   // The cursor belongs to this desk: leaving the page must not carry it to the next scenario.
   useEffect(() => () => setIncrementCursor(null), []);
   const ssDef = useMemo(() => stressStrainDef(x, y), [x, y]);
+  // New chart definitions only when an axis changes: each chart rebuilds its traces on a new def.
+  const fixedDefs = useMemo(
+    () => FIXED_CHARTS.map((base) => withXAxis(base, xOf[base.key] ?? base.xAxis)),
+    [xOf],
+  );
   const common = { store, entries, cursor, onCursor: setCursor, scenarioName, revision };
   const pickers = (
     <span className="flex items-center gap-1 text-xs">
@@ -81,8 +90,19 @@ export function ChartGrid({
       <IncrementCursor value={cursor} max={totalIncrements} onChange={setCursor} />
       <div className="grid grid-cols-1 gap-3 xl:grid-cols-2">
         <ResultChart def={ssDef} controls={pickers} overlays={overlays} {...common} />
-        {FIXED_CHARTS.map((def) => (
-          <ResultChart key={def.key} def={def} {...common} />
+        {fixedDefs.map((def, k) => (
+          <ResultChart
+            key={def.key}
+            def={def}
+            controls={
+              <XAxisSelect
+                value={def.xAxis}
+                choices={FIXED_CHARTS[k].xChoices}
+                onChange={(c) => setXOf((m) => ({ ...m, [def.key]: c }))}
+              />
+            }
+            {...common}
+          />
         ))}
       </div>
       <p className="text-xs text-ink-faint">

@@ -10,11 +10,18 @@ export interface SeriesDef {
   y: ResultColumn;
   name: string;
   dash: "solid" | "dash" | "dot";
+  /** The name when x is not the series' own (e.g. "Ȳ1" for "Ȳ1 vs d1"); else `name` stays. */
+  nameAlone?: string;
 }
 
 export interface ChartDef {
   key: string;
   title: string;
+  /** What is plotted, for "<subject> against <x>" titles when the horizontal axis changes. */
+  subject: string;
+  /** The horizontal axis drawn now, and the ones this chart offers (the first is its default). */
+  xAxis: XAxisChoice;
+  xChoices: readonly XAxisChoice[];
   xTitle: string;
   yTitle: string;
   xUnit: string;
@@ -24,6 +31,7 @@ export interface ChartDef {
   marks: boolean;
 }
 
+import type { XAxisChoice } from "./chart-x-axis";
 import {
   STRAIN_LABEL,
   STRESS_LABEL,
@@ -38,6 +46,10 @@ export function stressStrainDef(x: StrainComponent, y: StressComponent): ChartDe
   return {
     key: "stress-strain",
     title: `Stress–strain: ${STRESS_LABEL[y]} against ${STRAIN_LABEL[x]}`,
+    subject: `Stress–strain: ${STRESS_LABEL[y]}`,
+    // its own pickers choose the strain component (chart-grid)
+    xAxis: x,
+    xChoices: [x],
     xTitle: `${STRAIN_LABEL[x]} (mm/mm)`,
     yTitle: `${STRESS_LABEL[y]} (MPa)`,
     xUnit: "mm/mm",
@@ -60,10 +72,26 @@ const overIncrements = (
   dash,
 });
 
+// Against the increment, any strain and any stress component (damage or permanent strain against
+// σ11 reads as a threshold curve); energy and the thermodynamic force against strain, not stress.
+const HISTORY_X: readonly XAxisChoice[] = [
+  "increment",
+  "eps11",
+  "eps22",
+  "gam12",
+  "sig11",
+  "sig22",
+  "sig12",
+];
+const STRAIN_X: readonly XAxisChoice[] = ["increment", "eps11", "eps22", "gam12"];
+
 export const FIXED_CHARTS: readonly ChartDef[] = [
   {
     key: "damage",
     title: "Damage against increment",
+    subject: "Damage",
+    xAxis: "increment",
+    xChoices: HISTORY_X,
     xTitle: "increment",
     yTitle: "damage (–)",
     xUnit: "",
@@ -74,19 +102,25 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
   {
     key: "force",
     title: "Thermodynamic force against damage",
+    subject: "Thermodynamic force",
+    xAxis: "damage",
+    xChoices: ["damage", ...STRAIN_X],
     xTitle: "damage d (–)",
     yTitle: "Ȳ (MPa)",
     xUnit: "",
     yUnit: "MPa",
     series: [
-      { key: "f1", x: "d1", y: "Ybar1", name: "Ȳ1 vs d1", dash: "solid" },
-      { key: "f2", x: "d2", y: "Ybar2", name: "Ȳ2 vs d2", dash: "dash" },
+      { key: "f1", x: "d1", y: "Ybar1", name: "Ȳ1 vs d1", nameAlone: "Ȳ1", dash: "solid" },
+      { key: "f2", x: "d2", y: "Ybar2", name: "Ȳ2 vs d2", nameAlone: "Ȳ2", dash: "dash" },
     ],
     marks: false,
   },
   {
     key: "permanent-strain",
     title: "Permanent strain against increment",
+    subject: "Permanent strain",
+    xAxis: "increment",
+    xChoices: HISTORY_X,
     xTitle: "increment",
     yTitle: "εp (mm/mm)",
     xUnit: "",
@@ -101,6 +135,9 @@ export const FIXED_CHARTS: readonly ChartDef[] = [
   {
     key: "energy",
     title: "Work, stored and dissipated energy",
+    subject: "Work, stored and dissipated energy",
+    xAxis: "increment",
+    xChoices: STRAIN_X,
     xTitle: "increment",
     yTitle: "W, ψ, Φ (MPa = MJ/m³)",
     xUnit: "",

@@ -30,6 +30,8 @@ export interface ChartTrace {
   line?: { color: string; dash: string; width: number };
   marker?: { color: string; size: number; symbol: string | string[]; line?: object };
   text?: string[];
+  /** The increment of each point, for the hover readout when x is not the increment. */
+  customdata?: number[];
   hovertemplate: string;
 }
 
@@ -49,6 +51,11 @@ export function buildChart(
 ): BuiltChart {
   const traces: ChartTrace[] = [];
   const rowsOf: Int32Array[] = [];
+  // The readout at the cursor: both values with units, and the increment unless x already is it.
+  const byIncrement = def.xAxis !== "increment";
+  const readout = `${def.xTitle}: %{x:.5g}<br>${def.yTitle}: %{y:.5g}${byIncrement ? "<br>increment %{customdata}" : ""}`;
+  const incrementsAt = (src: TraceSource, idx: Int32Array) =>
+    byIncrement ? pick(src.columns.increment, idx) : undefined;
   for (const src of sources) {
     if (src.rows === 0) continue;
     const tag = `${src.id}${src.label ? `: ${src.label}` : ""}`;
@@ -65,7 +72,8 @@ export function buildChart(
         showlegend: k === 0 || def.series.length > 1,
         meta: { set: src.id, series: s.key },
         line: { color: src.color, dash: s.dash, width: 1.8 },
-        hovertemplate: `${s.name}<br>${def.xTitle}: %{x:.5g}<br>${def.yTitle}: %{y:.5g}<extra>${tag}</extra>`,
+        customdata: incrementsAt(src, idx),
+        hovertemplate: `${s.name}<br>${readout}<extra>${tag}</extra>`,
       });
     });
     const s0 = def.series[0];
@@ -113,7 +121,8 @@ export function buildChart(
         line: { width: 2, color: src.color },
       },
       text: extra.names,
-      hovertemplate: `%{text}<br>${def.xTitle}: %{x:.5g}<br>${def.yTitle}: %{y:.5g}<extra>${tag}</extra>`,
+      customdata: incrementsAt(src, rows),
+      hovertemplate: `%{text}<br>${readout}<extra>${tag}</extra>`,
     });
   }
   return { traces, rowsOf };
