@@ -4,8 +4,6 @@
  * not from the queue, runs the task, and sends expected errors as data: an AppError's class and
  * fields do not survive the thread boundary.
  */
-import { setPriority } from "node:os";
-
 import { uncertaintyAt } from "@/lib/calibration/refine";
 import { replayError, canReplay } from "@/lib/calibration/replay";
 import { readCurveCsv } from "@/lib/csv/read-curve-csv";
@@ -13,23 +11,13 @@ import { isAppError } from "@/lib/shared/errors";
 import { runConformance } from "@/lib/server/handoff/conformance/run-check";
 import { DetailedAppError } from "@/lib/server/workspace/errors";
 
+import { lowerOwnPriority } from "./niceness";
 import { reportCurvesInWorker } from "./report-curves-task";
 import { runInWorker } from "./run-task";
 import type { ComputeTask, CurveCsvOutcome, PostedTask, TaskOutcome } from "./task-types";
 
-/**
- * How much nicer than the request threads a compute thread runs (Linux nice, 0–19). On Linux the
- * nice value belongs to each thread, and setpriority with pid 0 sets the calling one: this worker
- * thread yields the core to the web process's request threads, so a page or /api/health answers
- * while runs are computing. Raising niceness needs no privilege; where the call is refused the
- * thread just runs at normal priority.
- */
-export const COMPUTE_NICENESS = 10;
-try {
-  setPriority(COMPUTE_NICENESS);
-} catch {
-  // not permitted or not supported here: normal priority
-}
+// First thing in the thread: yield the core to the request threads (niceness.ts).
+lowerOwnPriority();
 
 function readCurveCsvInWorker(task: Extract<ComputeTask, { kind: "read-curve-csv" }>) {
   // Only what the upload stores comes back: the table's cells stay in the worker.
