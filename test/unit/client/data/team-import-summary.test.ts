@@ -1,6 +1,3 @@
-import { readFileSync } from "node:fs";
-import path from "node:path";
-
 import { describe, expect, it } from "vitest";
 
 import {
@@ -10,84 +7,10 @@ import {
 } from "@/lib/client/data/team-import-summary";
 import { TEAM_EXPORT_FORMAT } from "@/lib/shared/validations/team-export";
 
+import { comment, DEMO_FILE, exportFile, revision, T } from "../../../fixtures/team-export";
+
 // Issue 13 item 8: the import page says what a team export will create, and what is wrong with
 // it in words (not a schema path), before anything is sent.
-
-const DEMO_FILE = JSON.parse(
-  readFileSync(path.join(process.cwd(), "test/fixtures/demo-scenario.json"), "utf8"),
-) as { parameterSets: Record<string, unknown>[] };
-const T = "2026-01-05T10:00:00.000Z";
-// A new object each time: a test that breaks one person must not break them all.
-const alice = () => ({ email: "alice@example.test", name: "Alice" });
-
-function revision(number: number, extra: Record<string, unknown> = {}) {
-  return {
-    number,
-    author: alice(),
-    message: "",
-    file: DEMO_FILE,
-    createdAt: T,
-    review: { state: "draft", by: null, at: null },
-    reviewEvents: [],
-    comments: [] as ReturnType<typeof comment>[],
-    ...extra,
-  };
-}
-
-function comment(key: string, parentKey: string | null = null) {
-  const base = { author: alice(), body: "Looks right", increment: null, createdAt: T };
-  return { key, parentKey, ...base, editedAt: null };
-}
-
-/** Two scenarios (3 revisions, 3 comments, 1 approved revision with 2 history entries), 1 set. */
-function exportFile() {
-  const { id: _id, label: _label, ...values } = DEMO_FILE.parameterSets[0];
-  return {
-    format: TEAM_EXPORT_FORMAT,
-    exportedAt: T,
-    team: { name: "Demo team", slug: "demo" },
-    parameterSets: [
-      {
-        name: "PA6-GF30 fitted",
-        values,
-        provenance: { kind: "typed" },
-        createdBy: alice(),
-        updatedBy: alice(),
-        createdAt: T,
-        updatedAt: T,
-      },
-    ],
-    scenarios: [
-      {
-        name: "Plate rib",
-        materialLabel: "PA6-GF30",
-        tags: [],
-        createdBy: alice(),
-        createdAt: T,
-        updatedAt: T,
-        revisions: [
-          revision(1, { comments: [comment("c1"), comment("c2", "c1")] }),
-          revision(2, {
-            review: { state: "approved", by: alice(), at: T },
-            reviewEvents: [
-              { from: "draft", to: "in_review", actor: alice(), note: "", at: T },
-              { from: "in_review", to: "approved", actor: alice(), note: "ok", at: T },
-            ],
-          }),
-        ],
-      },
-      {
-        name: "Clip",
-        materialLabel: "",
-        tags: ["cyclic"],
-        createdBy: null,
-        createdAt: T,
-        updatedAt: T,
-        revisions: [revision(1, { comments: [comment("c9")] })],
-      },
-    ],
-  };
-}
 
 describe("summarizeTeamExport", () => {
   it("counts what will be created, per scenario and in total", () => {
