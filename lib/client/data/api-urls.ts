@@ -22,6 +22,7 @@ export function teamApi(slug: string) {
     audit: (page: number) => `${base}/audit?page=${page}`,
     testRecords: () => `${base}/test-records`,
     testRecord: (id: string) => `${base}/test-records/${enc(id)}`,
+    importTeam: () => `${base}/import`,
   };
 }
 
@@ -31,6 +32,7 @@ export function teamPages(slug: string) {
   return {
     scenarios: `${base}/scenarios`,
     newScenario: `${base}/scenarios/new`,
+    importSection: `${base}/settings#import`,
     scenario: (id: string, params: Record<string, string | number | undefined> = {}) => {
       const q = Object.entries(params)
         .filter(([, v]) => v !== undefined && v !== "")

@@ -81,6 +81,18 @@ export default async function ScenariosPage({
             >
               Download the team export
             </a>
+            {can(ctx.role, "team:import") ? (
+              <>
+                {" "}
+                · load one into an empty team under{" "}
+                <Link
+                  href={teamPages(ctx.team.slug).importSection}
+                  className="text-verdigris-dark hover:underline"
+                >
+                  Import a team export
+                </Link>
+              </>
+            ) : null}
           </p>
           <Cautions compact />
         </section>
