@@ -26,6 +26,24 @@ export async function countRateLimitHit(
   return row.count;
 }
 
+/** The key's count in this window without counting an attempt (0 when none is stored). */
+export async function peekRateLimitCount(
+  db: Executor,
+  key: string,
+  windowStart: Date,
+): Promise<number> {
+  const [row] = await db
+    .select({ count: rateLimitBuckets.count })
+    .from(rateLimitBuckets)
+    .where(and(eq(rateLimitBuckets.key, key), eq(rateLimitBuckets.windowStart, windowStart)));
+  return row?.count ?? 0;
+}
+
+/** Forgets every window of the key (a successful sign-in clears its own counter). */
+export async function deleteRateLimitKey(db: Executor, key: string): Promise<void> {
+  await db.delete(rateLimitBuckets).where(eq(rateLimitBuckets.key, key));
+}
+
 /** Drops the key's windows that started before this one. */
 export async function deleteOlderRateLimitWindows(
   db: Executor,

@@ -1,6 +1,6 @@
 import { integer, pgTable, primaryKey, text, timestamp } from "drizzle-orm/pg-core";
 
-// Fixed-window counters: key is e.g. "sign-in:account:<email>" or "reset:ip:<address>".
+// Fixed-window counters: key is e.g. "sign-in:account:<email>:<address>" or "reset:ip:<address>".
 // Kept in PostgreSQL so every app process shares them.
 export const rateLimitBuckets = pgTable(
   "rate_limit_buckets",

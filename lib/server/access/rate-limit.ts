@@ -4,6 +4,7 @@ import type { Executor } from "@/db/client";
 import { countRateLimitHit, deleteOlderRateLimitWindows } from "@/db/queries/rate-limits";
 
 import { AppError } from "../../shared/errors";
+import type { ThrottleRule } from "./throttle-delay";
 
 export interface RateLimitRule {
   /** Attempts allowed per window. */
@@ -11,11 +12,16 @@ export interface RateLimitRule {
   windowMs: number;
 }
 
-// Sign-in: a person mistyping gets plenty of tries; a guesser gets few per hour per account.
-// The per-address limits are looser because an office may share one address.
+// Sign-in counts failures only and slows down before it refuses (lib/server/accounts/
+// sign-in-throttle.ts). The account's counter is kept per account AND client address, so a
+// guesser elsewhere never refuses the owner; the per-address counter (every account tried from
+// one address) is looser because a lab or an office may share one address.
+export const SIGN_IN_THROTTLE = {
+  accountAddress: { softLimit: 5, hardLimit: 50, windowMs: 15 * 60 * 1000 },
+  address: { softLimit: 30, hardLimit: 300, windowMs: 15 * 60 * 1000 },
+} satisfies Record<string, ThrottleRule>;
+
 export const RATE_LIMITS = {
-  signInAccount: { limit: 10, windowMs: 15 * 60 * 1000 },
-  signInAddress: { limit: 50, windowMs: 15 * 60 * 1000 },
   resetAccount: { limit: 3, windowMs: 60 * 60 * 1000 },
   resetAddress: { limit: 20, windowMs: 60 * 60 * 1000 },
   // Sign-up and invitations write mail to an address someone typed: cap both per address.
@@ -35,13 +41,18 @@ export async function hitRateLimit(
   rule: RateLimitRule,
   now: Date = new Date(),
 ): Promise<{ allowed: boolean; retryAfterSeconds: number }> {
-  const windowStart = new Date(Math.floor(now.getTime() / rule.windowMs) * rule.windowMs);
+  const windowStart = windowStartOf(now, rule.windowMs);
   const count = await countRateLimitHit(db, key, windowStart);
   await deleteOlderRateLimitWindows(db, key, windowStart);
   const retryAfterSeconds = Math.ceil(
     (windowStart.getTime() + rule.windowMs - now.getTime()) / 1000,
   );
   return { allowed: count <= rule.limit, retryAfterSeconds };
+}
+
+/** The start of the fixed window `now` falls in. */
+export function windowStartOf(now: Date, windowMs: number): Date {
+  return new Date(Math.floor(now.getTime() / windowMs) * windowMs);
 }
 
 /** Throw the user-facing error when any of the given keys is over its rule. */

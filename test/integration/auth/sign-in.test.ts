@@ -5,13 +5,12 @@ import { describe, expect, it, vi } from "vitest";
 
 import { users } from "@/db/schema/users";
 import { authenticate } from "@/lib/server/accounts/sign-in";
-import { hitRateLimit, RATE_LIMITS } from "@/lib/server/access/rate-limit";
 
 import { makeUser, openTestDb, TEST_PASSWORD, unique } from "../support/db";
 import { failedField, outcome } from "../support/outcome";
 
-// A time limit, not a speed goal: the lock-out tests hash a password per attempt (scrypt, N =
-// 2^17); under load they outlast 30 s.
+// A time limit, not a speed goal: each sign-in hashes a password (scrypt, N = 2^17); under load
+// a file of them outlasts 30 s. The throttle's own tests are in sign-in-rate-limits.test.ts.
 vi.setConfig({ testTimeout: 120000 });
 
 const db = openTestDb();
@@ -51,59 +50,6 @@ describe("sign-in", () => {
       unique("ip"),
     );
     expect(found.verifiedAt).toBeNull();
-  });
-
-  it("locks one account after too many attempts, even with the right password, from any address", async () => {
-    const user = await makeUser(db);
-    for (let i = 0; i < RATE_LIMITS.signInAccount.limit; i++) {
-      expect(
-        await outcome(
-          authenticate(db, { email: user.email, password: "wrong guess" }, unique("ip")),
-        ),
-      ).toBe("invalid:credentials");
-    }
-    const right = authenticate(db, { email: user.email, password: TEST_PASSWORD }, unique("ip"));
-    expect(await outcome(right)).toBe("rate-limited:sign-in");
-    // Another account is not affected.
-    const other = await makeUser(db);
-    expect(
-      await outcome(
-        authenticate(db, { email: other.email, password: TEST_PASSWORD }, unique("ip")),
-      ),
-    ).toBeNull();
-  });
-
-  it("locks one address after too many attempts across accounts", async () => {
-    const address = unique("ip");
-    // Earlier attempts from this address (against other accounts) have used up its window.
-    for (let i = 0; i < RATE_LIMITS.signInAddress.limit; i++) {
-      await hitRateLimit(db, `sign-in:address:${address}`, RATE_LIMITS.signInAddress);
-    }
-    const user = await makeUser(db);
-    expect(
-      await outcome(authenticate(db, { email: user.email, password: TEST_PASSWORD }, address)),
-    ).toBe("rate-limited:sign-in");
-    expect(
-      await outcome(authenticate(db, { email: user.email, password: TEST_PASSWORD }, unique("ip"))),
-    ).toBeNull();
-  });
-
-  it("opens again in the next window", async () => {
-    const user = await makeUser(db);
-    const address = unique("ip");
-    const now = new Date();
-    for (let i = 0; i <= RATE_LIMITS.signInAccount.limit; i++) {
-      await outcome(authenticate(db, { email: user.email, password: "wrong guess" }, address, now));
-    }
-    expect(
-      await outcome(authenticate(db, { email: user.email, password: TEST_PASSWORD }, address, now)),
-    ).toBe("rate-limited:sign-in");
-    const later = new Date(now.getTime() + RATE_LIMITS.signInAccount.windowMs);
-    expect(
-      await outcome(
-        authenticate(db, { email: user.email, password: TEST_PASSWORD }, address, later),
-      ),
-    ).toBeNull();
   });
 });
 
