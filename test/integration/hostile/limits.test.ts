@@ -98,11 +98,11 @@ describe("CSV built to exhaust the parser", () => {
     const wide = await upload(
       `${Array.from({ length: 1_000_000 }, (_, i) => `c${i}`).join(",")}\n1,2\n`,
     );
-    expect(wide.status).toBe(400);
+    expect(wide.status).toBe(422);
     expect(wide.body.error.code).toMatch(/^invalid:/);
     expect(wide.body.error.message).toMatch(/column/i);
     const quoted = await upload(`strain,stress\n"${"1,2\n".repeat(1_500_000)}`);
-    expect(quoted.status).toBe(400);
+    expect(quoted.status).toBe(422);
     expect(quoted.body.error.code).toMatch(/^invalid:/);
     const tooBig = await upload("1,2\n".repeat(3_000_000));
     expect([400, 413]).toContain(tooBig.status);
