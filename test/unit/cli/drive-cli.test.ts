@@ -31,7 +31,9 @@ function fileWith(name: string, json: unknown): string {
   return file;
 }
 
-describe("drive (spawned)", () => {
+// Each case starts Node with tsx: seconds on a busy two-core machine, so the cases get the
+// spawn's own limit rather than vitest's 5 s default (a time limit, not a speed check).
+describe("drive (spawned)", { timeout: 60_000 }, () => {
   it("prints the contract's header and one row per increment plus increment 0 for the demo file", () => {
     const { code, stdout, stderr } = drive(DEMO);
     expect(stderr).toBe("");
