@@ -131,7 +131,10 @@ export function CalibrationWorkspace({
                 marks={refinedValueMarks(refined.result)}
               />
               {refined.result.uncertainty ? (
-                <UncertaintyTable uncertainty={refined.result.uncertainty} />
+                <UncertaintyTable
+                  uncertainty={refined.result.uncertainty}
+                  law={refined.result.params.law}
+                />
               ) : null}
             </div>
           ) : null}
