@@ -128,7 +128,7 @@ export function CalibrationWorkspace({
                 params={refined.result.params}
                 identified={refined.result.free}
                 sourceWord={REFINED}
-                marks={refinedValueMarks(refined.result)}
+                marks={refinedValueMarks(refined.result, identified.identified)}
               />
               {refined.result.uncertainty ? (
                 <UncertaintyTable
