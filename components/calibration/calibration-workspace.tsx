@@ -128,10 +128,13 @@ export function CalibrationWorkspace({
                 params={refined.result.params}
                 identified={refined.result.free}
                 sourceWord={REFINED}
-                marks={refinedValueMarks(refined.result)}
+                marks={refinedValueMarks(refined.result, identified.identified)}
               />
               {refined.result.uncertainty ? (
-                <UncertaintyTable uncertainty={refined.result.uncertainty} />
+                <UncertaintyTable
+                  uncertainty={refined.result.uncertainty}
+                  law={refined.result.params.law}
+                />
               ) : null}
             </div>
           ) : null}

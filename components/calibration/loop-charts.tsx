@@ -3,6 +3,7 @@
 import { CurveChart } from "@/components/records/curve-chart";
 import type { LoopRow } from "@/lib/calibration/types";
 import type { MaterialParams } from "@/lib/mechanics/types";
+import { SQRT_Y_UNIT } from "@/lib/scenario/parameter-fields";
 
 /** d against √Y (or Y) with the fitted threshold line, and residual strain against d. */
 export function LoopCharts({ loops, params }: { loops: LoopRow[]; params: MaterialParams }) {
@@ -21,7 +22,7 @@ export function LoopCharts({ loops, params }: { loops: LoopRow[]; params: Materi
       <div data-testid="threshold-chart">
         <CurveChart
           height={260}
-          xTitle={sqrt ? "√Y (MPa^0.5)" : "Y (MPa)"}
+          xTitle={sqrt ? `√Y (${SQRT_Y_UNIT})` : "Y (MPa)"}
           yTitle="damage d"
           traces={[
             { name: "loops", x: xs, y: loops.map((l) => l.d), markers: true },

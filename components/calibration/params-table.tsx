@@ -1,21 +1,29 @@
-import type { MaterialParams } from "@/lib/mechanics/types";
+import type { DamageLaw, MaterialParams } from "@/lib/mechanics/types";
+import { PARAMETER_FIELDS } from "@/lib/scenario/parameter-fields";
+import { unitFor } from "@/lib/client/loading-desk/field-text";
 
-/** The parameters in the order every table shows them, with their units. */
-export const PARAM_ROWS: [keyof MaterialParams, string][] = [
-  ["E1", "MPa"],
-  ["E2", "MPa"],
-  ["nu12", ""],
-  ["G12", "MPa"],
-  ["Y0_1", "MPa"],
-  ["Y0_2", "MPa"],
-  ["a1", ""],
-  ["a2", ""],
-  ["b", ""],
-  ["k6", ""],
-  ["alpha", "mm/mm"],
-  ["beta", "mm/mm"],
-  ["dcrit", ""],
+/** The parameters in the order every table shows them. */
+export const PARAM_KEYS: (keyof MaterialParams)[] = [
+  "E1",
+  "E2",
+  "nu12",
+  "G12",
+  "Y0_1",
+  "Y0_2",
+  "a1",
+  "a2",
+  "b",
+  "k6",
+  "alpha",
+  "beta",
+  "dcrit",
 ];
+
+/** A parameter's unit for the law in use (the slopes a1, a2 follow it), from the one field list. */
+export function paramUnit(key: string, law: DamageLaw): string {
+  const field = PARAMETER_FIELDS.find((f) => f.symbol === key);
+  return field ? unitFor(field, law) : "";
+}
 
 /** Four significant digits, without an exponent for moduli in MPa. */
 export function formatValue(v: number): string {
@@ -39,7 +47,7 @@ export function ParamsTable({
   return (
     <table className="text-sm" data-testid="params-table">
       <tbody>
-        {PARAM_ROWS.map(([key, unit]) => (
+        {PARAM_KEYS.map((key) => (
           <tr key={key} className="border-b border-glaze-line">
             <th scope="row" className="py-1 pr-4 text-left font-medium">
               {key}
@@ -47,7 +55,7 @@ export function ParamsTable({
             <td className="py-1 pr-2 text-right tabular-nums" data-param={key}>
               {formatValue(Number(params[key]))}
             </td>
-            <td className="py-1 pr-4 text-ink-soft">{unit}</td>
+            <td className="py-1 pr-4 text-ink-soft">{paramUnit(key, params.law)}</td>
             {identified ? (
               <td className="py-1 text-xs text-ink-faint">
                 {marks?.[key] ?? (identified.includes(key) ? sourceWord : "starting value")}

@@ -1,8 +1,8 @@
 import type { FitUncertainty } from "@/lib/calibration/uncertainty";
 
-import { formatValue, PARAM_ROWS } from "./params-table";
+import type { DamageLaw } from "@/lib/mechanics/types";
 
-const unitOf = (name: string) => PARAM_ROWS.find(([key]) => key === name)?.[1] ?? "";
+import { formatValue, paramUnit } from "./params-table";
 
 /** A standard error shown with two significant digits: more would claim a precision it lacks. */
 const formatError = (v: number) => v.toPrecision(2);
@@ -12,7 +12,14 @@ const formatError = (v: number) => v.toPrecision(2);
  * correlations between them. Strong correlations (|r| ≥ 0.9) are marked: those parameters trade
  * off against each other on these records.
  */
-export function UncertaintyTable({ uncertainty }: { uncertainty: FitUncertainty }) {
+export function UncertaintyTable({
+  uncertainty,
+  law,
+}: {
+  uncertainty: FitUncertainty;
+  /** The growth law of the refined set: the slopes' unit follows it. */
+  law: DamageLaw;
+}) {
   const { params, correlation } = uncertainty;
   return (
     <div className="space-y-3" data-testid="uncertainty">
@@ -33,7 +40,7 @@ export function UncertaintyTable({ uncertainty }: { uncertainty: FitUncertainty 
                 {p.name}
               </th>
               <td className="py-1 pr-4 text-right tabular-nums">
-                {formatValue(p.value)} {unitOf(p.name)}
+                {formatValue(p.value)} {paramUnit(p.name, law)}
               </td>
               <td className="py-1 pr-4 text-right tabular-nums">
                 {p.se === null ? "not informed" : formatError(p.se)}

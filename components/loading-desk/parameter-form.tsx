@@ -1,7 +1,7 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useEffect } from "react";
+import { useEffect, useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import {
   PARAMETER_FIELDS,
@@ -11,6 +11,7 @@ import {
 } from "@/lib/scenario/parameter-fields";
 import { rangeFor, unitFor } from "@/lib/client/loading-desk/field-text";
 import { plausibilityWarnings } from "@/lib/scenario/plausibility";
+import { shownNumber } from "@/lib/shared/shown-number";
 import {
   type ParameterSet,
   type ParameterSetInput,
@@ -49,7 +50,38 @@ function toNumber(f: ParameterField) {
 /** A value as the read-only desk shows it: a choice in words, a blank optional value as "off". */
 function shownValue(f: ParameterField, value: unknown): string {
   if (value === null || value === undefined || value === "") return "off";
-  return f.kind === "choice" ? choiceText(f, String(value)) : String(value);
+  if (f.kind === "choice") return choiceText(f, String(value));
+  return typeof value === "number" ? shownNumber(value) : String(value);
+}
+
+/**
+ * The input shows the stored value rounded (fitted values carry 16 digits) while the form keeps
+ * the exact number: only the text in the box is rounded, once, when the box first appears; an
+ * edit replaces the value with what was typed. React calls a ref again on every render, so the
+ * boxes already rounded are remembered.
+ */
+function roundOnceShown(
+  rounded: WeakSet<HTMLInputElement>,
+  el: HTMLInputElement | null,
+  value: unknown,
+) {
+  if (!el || rounded.has(el)) return;
+  rounded.add(el);
+  if (typeof value === "number") el.value = shownNumber(value);
+}
+
+/** A registered input's props whose ref also rounds the shown text. */
+function withRoundedText<R extends { ref: (el: HTMLInputElement | null) => void }>(
+  registered: R,
+  afterRef: (el: HTMLInputElement | null) => void,
+): R {
+  return {
+    ...registered,
+    ref: (el: HTMLInputElement | null) => {
+      registered.ref(el); // the form writes the exact value into the box here…
+      afterRef(el); // …and the box then shows it rounded
+    },
+  };
 }
 
 export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
@@ -59,6 +91,7 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
     defaultValues: set,
   });
   const { errors } = form.formState;
+  const [rounded] = useState(() => new WeakSet<HTMLInputElement>());
   const law = String(useWatch({ control: form.control, name: "law" }) ?? "sqrtY");
   const values = useWatch({ control: form.control }) as Record<string, unknown>;
   const found = plausibilityWarnings(values);
@@ -151,7 +184,9 @@ export function ParameterForm({ set, readOnly, onValid }: ParameterFormProps) {
                       placeholder={f.kind === "nullable-number" ? "off" : undefined}
                       aria-invalid={error ? true : undefined}
                       aria-describedby={`${id}-hint`}
-                      {...form.register(name, { setValueAs: toNumber(f) })}
+                      {...withRoundedText(form.register(name, { setValueAs: toNumber(f) }), (el) =>
+                        roundOnceShown(rounded, el, set[name]),
+                      )}
                       className="mt-0.5 w-full rounded border border-glaze-line bg-white px-2 py-1 font-mono text-sm aria-[invalid]:border-kiln aria-[invalid]:bg-kiln-light/40"
                     />
                   )}

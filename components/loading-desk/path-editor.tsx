@@ -78,11 +78,18 @@ export function PathEditor({ text, doc, legs, errors, readOnly, onText, onDoc }:
           </label>
         )}
       </div>
-      {view === "text" ? (
+      {view === "text" && readOnly ? (
+        // Read-only shows the path as text to read, not a box that looks editable (issue 13 item 5).
+        <pre
+          aria-label="Path in text form"
+          className="overflow-x-auto whitespace-pre-wrap px-1 py-1 font-mono text-sm leading-5 text-ink"
+        >
+          {text}
+        </pre>
+      ) : view === "text" ? (
         <textarea
           ref={area}
           value={text}
-          readOnly={readOnly}
           onChange={(e) => onText(e.target.value)}
           spellCheck={false}
           rows={Math.min(14, Math.max(5, text.split("\n").length + 1))}

@@ -37,10 +37,11 @@ export function CurveChart({
         }))}
         layout={{
           autosize: true,
-          margin: { l: 60, r: 10, t: 10, b: 45 },
+          // The legend sits above the plot: beneath it, it ran into the x axis title.
+          margin: { l: 60, r: 10, t: 30, b: 45 },
           xaxis: { title: { text: xTitle } },
           yaxis: { title: { text: yTitle } },
-          legend: { orientation: "h", y: -0.25 },
+          legend: { orientation: "h", x: 0, xanchor: "left", y: 1, yanchor: "bottom" },
           paper_bgcolor: "rgba(0,0,0,0)",
         }}
         config={{ displaylogo: false, responsive: true }}

@@ -5,6 +5,7 @@ import {
   unitOf,
 } from "@/lib/scenario/parameter-fields";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
+import { shownNumber } from "@/lib/shared/shown-number";
 
 // A unit that depends on the growth law (the slopes) is written once per law the sets use.
 function unitForSets(field: ParameterField, sets: ParameterSet[]): string {
@@ -12,10 +13,11 @@ function unitForSets(field: ParameterField, sets: ParameterSet[]): string {
   return units.join(" / ");
 }
 
-/** A value as the table prints it: a choice in words with the file's word, a blank as "—". */
+/** A value as the table prints it: a choice in words with the file's word, a number rounded, a blank as "—". */
 function shown(field: ParameterField, value: unknown): string {
   if (value === null || value === undefined) return "—";
-  return field.kind === "choice" ? choiceText(field, String(value)) : String(value);
+  if (field.kind === "choice") return choiceText(field, String(value));
+  return typeof value === "number" ? shownNumber(value) : String(value);
 }
 
 /** Every parameter of every set with its unit: the table the simulation team types in. */

@@ -47,7 +47,7 @@ export function ProvenanceList({ items }: { items: SetProvenance[] }) {
           )}
           {p.uncertainty ? (
             <div className="mt-2 break-inside-avoid">
-              <UncertaintyTable uncertainty={p.uncertainty} />
+              <UncertaintyTable uncertainty={p.uncertainty} law={p.law} />
             </div>
           ) : null}
         </li>

@@ -1,12 +1,21 @@
 import { SET_COLORS } from "@/lib/client/loading-desk/set-colors";
+import {
+  type LineDash,
+  setLineStyle,
+  svgDashArray,
+} from "@/lib/client/loading-desk/set-line-style";
 import type { ChartGeometry } from "@/lib/server/handoff/report/svg-chart";
 
-const DASHES = [undefined, "5 3", "1.5 2.5"];
+// The second and third curve of a set (d2, …) as on screen.
+const SERIES_DASHES: LineDash[] = ["solid", "dash", "dot"];
+// Screen line widths to the chart's units: 480 units print 160 mm wide.
+const PRINT_WIDTH = 0.55;
 
 /**
  * A static chart for print: axes, ticks, one path per series, a legend. Series come in groups
  * of `seriesPerSet` per parameter set, in the file's order: each set keeps the colour it has on
- * screen, and the second and third series of a set (d2, …) are dashed and dotted.
+ * screen and its line style (set-line-style: its own dash, or with several curves per set a
+ * narrower line per set while d2, … are dashed and dotted).
  */
 export function SvgChart({
   title,
@@ -23,7 +32,15 @@ export function SvgChart({
 }) {
   const bottom = chart.height - 32;
   const colour = (i: number) => SET_COLORS[Math.floor(i / seriesPerSet) % SET_COLORS.length];
-  const dash = (i: number) => DASHES[(i % seriesPerSet) % DASHES.length];
+  const line = (i: number) => {
+    const style = setLineStyle(
+      Math.floor(i / seriesPerSet),
+      SERIES_DASHES[(i % seriesPerSet) % SERIES_DASHES.length],
+      seriesPerSet,
+    );
+    const width = style.width * PRINT_WIDTH;
+    return { width, dash: svgDashArray(style.dash, width) };
+  };
   return (
     // In print one chart per row, 160 mm wide: the 9-unit tick labels then print at 8.5 pt.
     <figure className="break-inside-avoid print:mx-auto print:w-[160mm]">
@@ -80,8 +97,8 @@ export function SvgChart({
             d={p.d}
             fill="none"
             stroke={colour(i)}
-            strokeDasharray={dash(i)}
-            strokeWidth={1.4}
+            strokeDasharray={line(i).dash}
+            strokeWidth={line(i).width}
           />
         ))}
       </svg>
@@ -95,8 +112,8 @@ export function SvgChart({
                 y1="4"
                 y2="4"
                 stroke={colour(i)}
-                strokeWidth="2"
-                strokeDasharray={dash(i)}
+                strokeWidth={Math.max(1.2, line(i).width)}
+                strokeDasharray={line(i).dash}
               />
             </svg>
             {p.name}

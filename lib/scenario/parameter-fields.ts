@@ -33,6 +33,9 @@ export type GrowthLaw = "sqrtY" | "linY";
 // The slopes a1, a2 relate d to sqrt(Y) or to Y (A.3), so their unit follows the law.
 const SLOPE_UNITS = { sqrtY: "MPa⁻⁰·⁵", linY: "MPa⁻¹" } as const;
 
+/** The unit of √Y (Y in MPa), written in the same typeset form as the slopes' units. */
+export const SQRT_Y_UNIT = "MPa⁰·⁵";
+
 export const PARAMETER_FIELDS: readonly ParameterField[] = [
   {
     symbol: "E1",

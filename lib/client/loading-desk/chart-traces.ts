@@ -6,6 +6,7 @@ import type { ResultColumns } from "@/lib/mechanics/types";
 import type { ChartDef } from "./chart-defs";
 import { decimateIndices, pick } from "./decimate";
 import { findMarks } from "./marks";
+import { setLineStyle, setStyleIndex } from "./set-line-style";
 
 /** Buckets per curve: ≤ 6 points each, ~1,500 points per trace at most. */
 export const DISPLAY_BUCKETS = 250;
@@ -71,7 +72,10 @@ export function buildChart(
         legendgroup: src.id,
         showlegend: k === 0 || def.series.length > 1,
         meta: { set: src.id, series: s.key },
-        line: { color: src.color, dash: s.dash, width: 1.8 },
+        line: {
+          color: src.color,
+          ...setLineStyle(setStyleIndex(src.color), s.dash, def.series.length),
+        },
         customdata: incrementsAt(src, idx),
         hovertemplate: `${s.name}<br>${readout}<extra>${tag}</extra>`,
       });

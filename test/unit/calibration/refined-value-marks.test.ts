@@ -24,6 +24,23 @@ describe("refined-value marks", () => {
     expect(Object.values(marks)).not.toContain(undefined);
   });
 
+  it("says a value the identification took from the records and the refinement kept is identified, kept", () => {
+    // dcrit is found from the records (spec E) and is no refinement unknown; a1 the user fixed.
+    const marks = refinedValueMarks({ free: ["E1"], tied: ["E2"], notInformed: ["k6"] }, [
+      "E1",
+      "E2",
+      "a1",
+      "dcrit",
+    ]);
+    expect(marks).toEqual({
+      E1: "refined",
+      E2: "tied to axis 1",
+      k6: "not informed by these records",
+      a1: "identified, kept",
+      dcrit: "identified, kept",
+    });
+  });
+
   it("leaves values the user fixed without a mark", () => {
     const marks = refinedValueMarks({ free: ["E1"], tied: [], notInformed: ["E2"] });
     expect(marks).toEqual({ E1: "refined", E2: "not informed by these records" });

@@ -19,6 +19,7 @@ const typed: SetProvenance = {
   fittedAt: null,
   warnings: [],
   uncertainty: null,
+  law: "sqrtY",
 };
 
 describe("ProvenanceList", () => {

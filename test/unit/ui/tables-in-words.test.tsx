@@ -22,6 +22,14 @@ describe("tables in the reader's words", () => {
     expect(table.textContent).toContain("d linear in √Ȳ (sqrtY)");
   });
 
+  it("the report's parameter table prints fitted values to six significant digits", () => {
+    render(<ParameterTable sets={[{ ...set, E1: 10994.028523930534, nu12: 0.31234567891 }]} />);
+    const table = screen.getByTestId("report-parameters");
+    expect(table.textContent).toContain("10994");
+    expect(table.textContent).not.toContain("10994.0285");
+    expect(table.textContent).toContain("0.312346");
+  });
+
   it("the results table heads its columns with symbols and units", () => {
     const store = {
       get: () => undefined,

@@ -19,7 +19,7 @@ describe("UncertaintyTable", () => {
       [1, 1, 1],
       [11000, 0.6, 1],
     )!;
-    render(<UncertaintyTable uncertainty={u} />);
+    render(<UncertaintyTable uncertainty={u} law="sqrtY" />);
     const e1 = document.querySelector<HTMLElement>('tr[data-param="E1"]')!;
     expect(within(e1).getByText("11000 MPa")).toBeTruthy();
     expect(e1.textContent).toContain(u.params[0].se!.toPrecision(2));

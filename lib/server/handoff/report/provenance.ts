@@ -37,6 +37,8 @@ export interface SetProvenance {
   fittedAt: string | null;
   warnings: string[];
   uncertainty: FitUncertainty | null;
+  /** the set's damage law: the unit of a1, a2 depends on it */
+  law: ParameterSet["law"];
 }
 
 const NUMERIC = [
@@ -88,6 +90,7 @@ export function matchProvenance(
       fittedAt: fit?.createdAt ?? null,
       warnings: fit?.warnings ?? [],
       uncertainty: fit?.uncertainty ?? null,
+      law: set.law,
     };
   });
 }

@@ -28,4 +28,18 @@ describe("refined-values table", () => {
     expect(wordFor(container, "k6")).toBe("not informed by these records");
     expect(wordFor(container, "b")).toBe("starting value");
   });
+
+  it("marks dcrit, found from the records and kept by the refinement, as identified, kept", () => {
+    const outcome = { free: ["E1"], tied: [], notInformed: [] } as const;
+    const { container } = render(
+      <ParamsTable
+        params={DEMO_PARAMS}
+        identified={[...outcome.free]}
+        sourceWord={REFINED}
+        marks={refinedValueMarks(outcome, ["E1", "dcrit"])}
+      />,
+    );
+    expect(wordFor(container, "dcrit")).toBe("identified, kept");
+    expect(wordFor(container, "E1")).toBe("refined");
+  });
 });

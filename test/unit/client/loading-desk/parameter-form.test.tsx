@@ -47,6 +47,41 @@ describe("parameter form", () => {
   });
 });
 
+describe("parameter form: fitted values shown rounded, stored exact", () => {
+  // a fitted E1 as the issue 13 browser walk saw it on the desk
+  const fitted = { ...set, E1: 10994.028523930534 };
+
+  it("shows six significant digits in the box", () => {
+    render(<ParameterForm set={fitted} onValid={() => {}} />);
+    expect((screen.getByLabelText(/^E1/) as HTMLInputElement).value).toBe("10994");
+  });
+
+  it("keeps the exact value when another field is edited", async () => {
+    const onValid = vi.fn();
+    render(<ParameterForm set={fitted} onValid={onValid} />);
+    fireEvent.change(screen.getByLabelText(/^E2/), { target: { value: "4000" } });
+    await waitFor(() =>
+      expect(onValid).toHaveBeenCalledWith(
+        expect.objectContaining({ E1: 10994.028523930534, E2: 4000 }),
+      ),
+    );
+  });
+
+  it("replaces the value with what was typed", async () => {
+    const onValid = vi.fn();
+    render(<ParameterForm set={fitted} onValid={onValid} />);
+    fireEvent.change(screen.getByLabelText(/^E1/), { target: { value: "11000" } });
+    await waitFor(() =>
+      expect(onValid).toHaveBeenCalledWith(expect.objectContaining({ E1: 11000 })),
+    );
+  });
+
+  it("shows the read-only value rounded too", () => {
+    render(<ParameterForm set={fitted} readOnly onValid={() => {}} />);
+    expect(screen.getByLabelText(/^E1/).textContent).toBe("10994");
+  });
+});
+
 describe("parameter form: bad E1 values keep the last valid curves", () => {
   const notice =
     /E1 \(Young's modulus, axis 1\) needs a valid value: the charts show the last valid values of set A/;

@@ -1,6 +1,7 @@
 import { cleanup, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { ParameterForm } from "@/components/loading-desk/parameter-form";
+import { PathEditor } from "@/components/loading-desk/path-editor";
 import { PathTable } from "@/components/loading-desk/path-table";
 import { ReadOnlyBanner } from "@/components/loading-desk/read-only-banner";
 import { SetListPanel } from "@/components/loading-desk/set-list-panel";
@@ -81,6 +82,40 @@ describe("read-only loading desk (issue 13 item 5)", () => {
     expect(screen.getByLabelText("leg 1: target of 11 (mm/mm)").textContent).toBe("0.01");
     expect(screen.getByLabelText("leg 1: increments").textContent).toBe("100");
     expect(container.textContent).toContain("strain");
+  });
+
+  it("shows the path text as preformatted text, not a text box", () => {
+    const text = "strain11 0.01 over 100";
+    const doc: PathDoc = { items: [] };
+    const { container } = render(
+      <PathEditor
+        text={text}
+        doc={doc}
+        legs={[]}
+        errors={[]}
+        readOnly
+        onText={vi.fn()}
+        onDoc={vi.fn()}
+      />,
+    );
+    expect(container.querySelector("textarea, input, select")).toBeNull();
+    const shown = screen.getByLabelText("Path in text form");
+    expect(shown.tagName).toBe("PRE");
+    expect(shown.textContent).toBe(text);
+  });
+
+  it("keeps the path text box for editors", () => {
+    const { container } = render(
+      <PathEditor
+        text="x"
+        doc={{ items: [] }}
+        legs={[]}
+        errors={[]}
+        onText={vi.fn()}
+        onDoc={vi.fn()}
+      />,
+    );
+    expect(container.querySelector("textarea")).not.toBeNull();
   });
 
   it("keeps inputs for editors", () => {

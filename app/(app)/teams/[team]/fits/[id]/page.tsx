@@ -81,7 +81,7 @@ export default async function FitPage({
       </div>
       {fit.uncertainty ? (
         <div className="mt-6">
-          <UncertaintyTable uncertainty={fit.uncertainty} />
+          <UncertaintyTable uncertainty={fit.uncertainty} law={fit.params.law} />
         </div>
       ) : null}
       {fit.reports.map((r) =>
