@@ -90,3 +90,26 @@ export function couponFrame(orientation: CouponOrientation): CouponFrame {
     thetaD: wrapFrame(principal.thetaA - orientation.cutAngle),
   };
 }
+
+/** The upload form's draft: the section switched on, the cut angle and the layer rows as typed. */
+export interface CouponOrientationDraft {
+  cutAngle: string;
+  layers: { fraction: string; a11: string; a12: string }[];
+}
+
+/** The draft as the record stores it, or every problem in the form's words. */
+export function readCouponOrientation(
+  draft: CouponOrientationDraft,
+): { ok: true; value: CouponOrientation } | { ok: false; message: string } {
+  const number = (s: string) => (s.trim() === "" ? Number.NaN : Number(s));
+  const parsed = couponOrientationSchema.safeParse({
+    cutAngle: number(draft.cutAngle),
+    layers: draft.layers.map((l) => ({
+      fraction: number(l.fraction),
+      a11: number(l.a11),
+      a12: number(l.a12),
+    })),
+  });
+  if (parsed.success) return { ok: true, value: parsed.data };
+  return { ok: false, message: parsed.error.issues.map((i) => i.message).join("; ") };
+}
