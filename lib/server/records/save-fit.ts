@@ -80,6 +80,18 @@ async function fitOutcome(
   };
 }
 
+function orientationsOf(records: LoadedRecord[]) {
+  const carrying = records.filter((r) => r.couponOrientation !== null);
+  if (carrying.length === 0) return {};
+  return {
+    orientations: carrying.map((r) => ({
+      record: `${r.name} (${r.id})`.slice(0, 200),
+      cutAngle: r.couponOrientation!.cutAngle,
+      layers: r.couponOrientation!.layers,
+    })),
+  };
+}
+
 /**
  * Saves a fit and its result as a new parameter set in one transaction; the set's provenance
  * names the records, the method and the RMS residual of each record (MPa).
@@ -100,6 +112,8 @@ export async function saveFit(db: Db, actor: Actor, teamSlug: string, input: unk
     residuals: Object.fromEntries(
       out.residuals.map((r) => [`${names.get(r.id)} RMS MPa`.slice(0, 100), r.rms]),
     ),
+    // The coupons' tensors travel with the set (team export included), so its frame is traceable.
+    ...orientationsOf(records),
   };
   return db.transaction(async (tx) => {
     // The workspace service runs inside this transaction (a savepoint): set and fit, or neither.
