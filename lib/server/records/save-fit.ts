@@ -18,6 +18,7 @@ import { authorizeTeam } from "@/lib/server/access/team-access";
 import { createParameterSet } from "@/lib/server/workspace/parameter-sets";
 import { parseWithPath } from "@/lib/server/workspace/parse";
 
+import type { OrientationProvenance } from "@/lib/shared/validations/parameter-sets";
 import { saveFitSchema } from "./fit-schema";
 import { runIdentify } from "./identify-records";
 import { loadRecordsForFit, type LoadedRecord } from "./load-records";
@@ -80,16 +81,17 @@ async function fitOutcome(
   };
 }
 
-function orientationsOf(records: LoadedRecord[]) {
-  const carrying = records.filter((r) => r.couponOrientation !== null);
-  if (carrying.length === 0) return {};
-  return {
-    orientations: carrying.map((r) => ({
+/** The starting values' orientation state, then each oriented coupon's, or nothing. */
+function orientationsOf(records: LoadedRecord[], base: OrientationProvenance | undefined) {
+  const coupons = records
+    .filter((r) => r.couponOrientation !== null)
+    .map((r) => ({
       record: `${r.name} (${r.id})`.slice(0, 200),
       cutAngle: r.couponOrientation!.cutAngle,
       layers: r.couponOrientation!.layers,
-    })),
-  };
+    }));
+  const all = [...(base ? [base] : []), ...coupons];
+  return all.length > 0 ? { orientations: all } : {};
 }
 
 /**
@@ -113,7 +115,7 @@ export async function saveFit(db: Db, actor: Actor, teamSlug: string, input: unk
       out.residuals.map((r) => [`${names.get(r.id)} RMS MPa`.slice(0, 100), r.rms]),
     ),
     // The coupons' tensors travel with the set (team export included), so its frame is traceable.
-    ...orientationsOf(records),
+    ...orientationsOf(records, data.method === "identify" ? data.baseOrientation : undefined),
   };
   return db.transaction(async (tx) => {
     // The workspace service runs inside this transaction (a savepoint): set and fit, or neither.

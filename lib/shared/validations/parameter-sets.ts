@@ -11,7 +11,7 @@ const nameSchema = z
 
 // An orientation state a set came from (spec A.5): the layer tensors, the closure when the
 // stiffness was averaged with one, and the cut angle φ with the record's name when a coupon's.
-const orientationProvenanceSchema = z.strictObject({
+export const orientationProvenanceSchema = z.strictObject({
   record: z.string().max(200).optional(),
   cutAngle: z.number().min(-180).max(180).optional(),
   closure: z.enum(CLOSURES).optional(),
@@ -20,6 +20,8 @@ const orientationProvenanceSchema = z.strictObject({
     .min(1)
     .max(50),
 });
+
+export type OrientationProvenance = z.output<typeof orientationProvenanceSchema>;
 
 export const provenanceSchema = z.strictObject({
   kind: z.enum(["typed", "fitted", "constituents"], "Provenance is typed, fitted or constituents."),

@@ -41,6 +41,7 @@ describe("the team export carries the orientation tensors with the sets (issue 1
       method: "identify",
       recordIds: [up.id],
       name: fitted,
+      baseOrientation: stack, // the starting values came from "Use as parameter set"
     });
     const fromState = unique("From orientation state");
     await createParameterSet(db, w.members.editor, w.slug, {
@@ -51,7 +52,10 @@ describe("the team export carries the orientation tensors with the sets (issue 1
 
     const first = await exportTeam(db, w.members.owner, w.slug);
     const fittedSet = first.parameterSets.find((s) => s.name === fitted)!;
-    expect(fittedSet.provenance.orientations).toEqual([{ record: `cut-30 (${up.id})`, ...coupon }]);
+    expect(fittedSet.provenance.orientations).toEqual([
+      stack,
+      { record: `cut-30 (${up.id})`, ...coupon },
+    ]);
     expect((fittedSet.values as { thetaD: number }).thetaD).toBeCloseTo(22.5 - 30, 9);
     const stateSet = first.parameterSets.find((s) => s.name === fromState)!;
     expect(stateSet.provenance.orientations).toEqual([stack]);
