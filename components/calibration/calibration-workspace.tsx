@@ -15,6 +15,7 @@ import type { IdentifyResponse } from "@/lib/server/records/identify-records";
 import { ConstituentsForm, type ElasticEstimate } from "./constituents-form";
 import { DesignCaution } from "./design-caution";
 import { IdentifyReport } from "./identify-report";
+import type { OrientedEstimate } from "./orientation-section";
 import { ParamsTable } from "./params-table";
 import { RecordPicker } from "./record-picker";
 import { RefinePanel } from "./refine-panel";
@@ -32,6 +33,8 @@ export function CalibrationWorkspace({
   const [selected, setSelected] = useState<string[]>([]);
   const [law, setLaw] = useState<"sqrtY" | "linY">("sqrtY");
   const [estimate, setEstimate] = useState<ElasticEstimate | null>(null);
+  // The orientation state behind the estimate, if it came from one: saved with the set.
+  const [estimateState, setEstimateState] = useState<OrientedEstimate["provenance"] | null>(null);
   const [identified, setIdentified] = useState<IdentifyResponse | null>(null);
   const [refined, setRefined] = useState<{
     result: RefineResult;
@@ -70,13 +73,22 @@ export function CalibrationWorkspace({
         method: "identify",
         law,
         base: estimate ? { ...DEMO_PARAMS, ...estimate, label: "" } : undefined,
+        baseOrientation:
+          estimate && estimateState
+            ? { closure: estimateState.closure, layers: estimateState.layers }
+            : undefined,
       };
 
   return (
     <div className="space-y-8">
       <DesignCaution />
       <RecordPicker records={records} selected={selected} onChange={setSelected} />
-      <ConstituentsForm onUse={setEstimate} />
+      <ConstituentsForm
+        onUse={(values, state) => {
+          setEstimate(values);
+          setEstimateState(state ?? null);
+        }}
+      />
       {estimate ? (
         <p className="text-sm text-ink-soft">
           Starting values: E1 {estimate.E1.toFixed(0)} MPa, E2 {estimate.E2.toFixed(0)} MPa

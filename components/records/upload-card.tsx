@@ -6,7 +6,13 @@ import { useForm } from "react-hook-form";
 
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
+import {
+  readCouponOrientation,
+  type CouponOrientationDraft,
+} from "@/lib/calibration/micromechanics/coupon-orientation";
 import { testRecordMetaSchema, type ColumnMappingInput } from "@/lib/csv/record-schema";
+
+import { CouponOrientationFields } from "./coupon-orientation-fields";
 
 import { CurveChart } from "./curve-chart";
 import { MappingFields } from "./mapping-fields";
@@ -27,6 +33,8 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
   const [mapping, setMapping] = useState<ColumnMappingInput | undefined>(undefined);
   const result = useCsvPreview(file.text, mapping);
   const [serverError, setServerError] = useState<string | null>(null);
+  const [coupon, setCoupon] = useState<CouponOrientationDraft | null>(null);
+  const [couponError, setCouponError] = useState<string | undefined>(undefined);
   const form = useForm<MetaInput, unknown, MetaOutput>({
     resolver: zodResolver(testRecordMetaSchema),
     defaultValues: { testType: "tension-1", loading: "cyclic", specimenId: "", orientation: 0 },
@@ -37,7 +45,11 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
 
   const submit = form.handleSubmit(async (meta) => {
     setServerError(null);
-    const body = { fileName: file.name, text: file.text, mapping: shown, meta };
+    const read = coupon ? readCouponOrientation(coupon) : null;
+    setCouponError(read && !read.ok ? read.message : undefined);
+    if (read && !read.ok) return;
+    const withCoupon = read ? { ...meta, couponOrientation: read.value } : meta;
+    const body = { fileName: file.name, text: file.text, mapping: shown, meta: withCoupon };
     const res = await postJson(`/api/v1/teams/${teamSlug}/test-records`, body);
     if (res.ok) onSaved(file.name);
     else setServerError(res.message);
@@ -86,6 +98,12 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
           ) : null}
           <form onSubmit={submit} className="space-y-4" noValidate>
             <MetaFields idPrefix={id} form={form} />
+            <CouponOrientationFields
+              idPrefix={id}
+              value={coupon}
+              onChange={setCoupon}
+              error={couponError}
+            />
             <FieldError message={serverError ?? undefined} />
             <Button type="submit" pending={form.formState.isSubmitting} disabled={!preview.curve}>
               Save test record

@@ -20,6 +20,7 @@ const SUMMARY = {
   temperature: testRecords.temperature,
   laboratory: testRecords.laboratory,
   notes: testRecords.notes,
+  couponOrientation: testRecords.couponOrientation,
   mapping: testRecords.mapping,
   headers: testRecords.headers,
   warnings: testRecords.warnings,
@@ -90,6 +91,7 @@ export async function findRecordsForFit(db: Executor, teamId: string, ids: strin
       name: testRecords.name,
       testType: testRecords.testType,
       orientation: testRecords.orientation,
+      couponOrientation: testRecords.couponOrientation,
       points: testRecords.points,
     })
     .from(testRecords)

@@ -14,6 +14,13 @@ export interface ParameterSetProvenance {
   method?: string;
   residuals?: Record<string, number>;
   note?: string;
+  /** The orientation states behind the set (spec A.5): coupons' layer tensors and cut angles. */
+  orientations?: {
+    record?: string;
+    cutAngle?: number;
+    closure?: "exact" | "hybrid" | "linear" | "quadratic";
+    layers: { fraction: number; a11: number; a12: number }[];
+  }[];
 }
 
 // A team's library of parameter sets. Values are validated by the scenario module's

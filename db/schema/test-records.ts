@@ -9,6 +9,8 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 
+import type { CouponOrientation } from "@/lib/calibration/micromechanics/coupon-orientation";
+
 import { teams } from "./teams";
 import { users } from "./users";
 
@@ -52,6 +54,8 @@ export const testRecords = pgTable(
     temperature: doublePrecision("temperature"), // °C
     laboratory: text("laboratory"),
     notes: text("notes"),
+    // The coupon's cut angle from the flow direction and its layer tensors (spec A.5), if known.
+    couponOrientation: jsonb("coupon_orientation").$type<CouponOrientation>(),
     mapping: jsonb("mapping").$type<StoredMapping>().notNull(),
     headers: jsonb("headers").$type<string[]>().notNull(),
     warnings: jsonb("warnings").$type<string[]>().notNull().default([]),

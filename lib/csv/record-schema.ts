@@ -3,6 +3,8 @@
  * the upload form, the server action and the worker use this one schema.
  */
 import { z } from "zod";
+import { couponOrientationSchema } from "@/lib/calibration/micromechanics/coupon-orientation";
+
 import { STRAIN_UNITS, STRESS_UNITS } from "./units";
 
 export const TEST_TYPES = [
@@ -50,5 +52,6 @@ export const testRecordMetaSchema = z.strictObject({
   temperature: z.number().min(-273.15).max(1000).optional(), // °C
   laboratory: text(200).optional(),
   notes: text(5000).optional(),
+  couponOrientation: couponOrientationSchema.optional(), // cut angle φ and layer tensors (A.5)
 });
 export type TestRecordMeta = z.infer<typeof testRecordMetaSchema>;

@@ -5,6 +5,7 @@ import { z } from "zod";
 
 import { FITTABLE } from "@/lib/calibration/refine-params";
 import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
+import { orientationProvenanceSchema } from "@/lib/shared/validations/parameter-sets";
 
 const recordIds = z
   .array(z.string().uuid("Pick test records of this team."), "Pick at least one test record.")
@@ -27,7 +28,12 @@ const setName = z
   .max(200, "Keep the name under 200 characters.");
 
 export const saveFitSchema = z.discriminatedUnion("method", [
-  identifyRequestSchema.extend({ method: z.literal("identify"), name: setName }),
+  identifyRequestSchema.extend({
+    method: z.literal("identify"),
+    name: setName,
+    /** The orientation state the starting values came from ("Use as parameter set"), if any. */
+    baseOrientation: orientationProvenanceSchema.optional(),
+  }),
   z.strictObject({
     method: z.literal("refine"),
     name: setName,

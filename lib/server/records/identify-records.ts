@@ -3,6 +3,7 @@ import "server-only";
 import type { Db } from "@/db/client";
 import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
 import { identify, type IdentifyResult } from "@/lib/calibration/identify";
+import { identifiedFrame } from "@/lib/calibration/identify-frame";
 import type { Actor } from "@/lib/server/accounts/actor";
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
@@ -28,14 +29,27 @@ export function runIdentify(records: LoadedRecord[], data: IdentifyData): Identi
     records.map((r) => r.input),
     { base, law: data.law, modulus: data.modulus },
   );
-  const notes = data.base
-    ? result.notes
-    : [
-        ...result.notes,
-        "Values no record informs keep the invented demo set's values; give starting values to replace them.",
-      ];
+  // The coupons' orientation states fix the damage frame (spec A.5), or say why they cannot.
+  const frame = identifiedFrame(
+    records.map((r) => ({ name: r.name, couponOrientation: r.couponOrientation })),
+  );
+  const notes = [
+    ...result.notes,
+    ...(frame.kind === "frame" ? [frame.note] : []),
+    ...(data.base
+      ? []
+      : [
+          "Values no record informs keep the invented demo set's values; give starting values to replace them.",
+        ]),
+  ];
   return {
     ...result,
+    params: frame.kind === "frame" ? { ...result.params, thetaD: frame.thetaD } : result.params,
+    identified:
+      frame.kind === "frame" && !result.identified.includes("thetaD")
+        ? [...result.identified, "thetaD"]
+        : result.identified,
+    warnings: frame.kind === "warning" ? [...result.warnings, frame.warning] : result.warnings,
     notes,
     recordNames: Object.fromEntries(records.map((r) => [r.id, r.name])),
     base: data.base ? "given" : "demo",

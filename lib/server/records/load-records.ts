@@ -2,6 +2,7 @@ import "server-only";
 
 import type { Executor } from "@/db/client";
 import { findRecordsForFit } from "@/db/queries/test-records";
+import type { CouponOrientation } from "@/lib/calibration/micromechanics/coupon-orientation";
 import type { TestRecordInput } from "@/lib/calibration/types";
 import { notFound } from "@/lib/server/workspace/errors";
 
@@ -11,6 +12,7 @@ export interface LoadedRecord {
   id: string;
   name: string;
   input: TestRecordInput;
+  couponOrientation: CouponOrientation | null;
 }
 
 /** The chosen records in the order asked; one foreign or unknown id fails the whole request. */
@@ -25,6 +27,11 @@ export async function loadRecordsForFit(
   return unique.map((id) => {
     const row = byId.get(id);
     if (!row) throw notFound("test-record");
-    return { id, name: row.name, input: toTestRecordInput(row) }; // the input carries the name for notes
+    return {
+      id,
+      name: row.name,
+      input: toTestRecordInput(row),
+      couponOrientation: row.couponOrientation ?? null,
+    }; // the input carries the name for notes
   });
 }

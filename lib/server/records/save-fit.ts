@@ -18,6 +18,7 @@ import { authorizeTeam } from "@/lib/server/access/team-access";
 import { createParameterSet } from "@/lib/server/workspace/parameter-sets";
 import { parseWithPath } from "@/lib/server/workspace/parse";
 
+import type { OrientationProvenance } from "@/lib/shared/validations/parameter-sets";
 import { saveFitSchema } from "./fit-schema";
 import { runIdentify } from "./identify-records";
 import { loadRecordsForFit, type LoadedRecord } from "./load-records";
@@ -80,6 +81,19 @@ async function fitOutcome(
   };
 }
 
+/** The starting values' orientation state, then each oriented coupon's, or nothing. */
+function orientationsOf(records: LoadedRecord[], base: OrientationProvenance | undefined) {
+  const coupons = records
+    .filter((r) => r.couponOrientation !== null)
+    .map((r) => ({
+      record: `${r.name} (${r.id})`.slice(0, 200),
+      cutAngle: r.couponOrientation!.cutAngle,
+      layers: r.couponOrientation!.layers,
+    }));
+  const all = [...(base ? [base] : []), ...coupons];
+  return all.length > 0 ? { orientations: all } : {};
+}
+
 /**
  * Saves a fit and its result as a new parameter set in one transaction; the set's provenance
  * names the records, the method and the RMS residual of each record (MPa).
@@ -100,6 +114,8 @@ export async function saveFit(db: Db, actor: Actor, teamSlug: string, input: unk
     residuals: Object.fromEntries(
       out.residuals.map((r) => [`${names.get(r.id)} RMS MPa`.slice(0, 100), r.rms]),
     ),
+    // The coupons' tensors travel with the set (team export included), so its frame is traceable.
+    ...orientationsOf(records, data.method === "identify" ? data.baseOrientation : undefined),
   };
   return db.transaction(async (tx) => {
     // The workspace service runs inside this transaction (a savepoint): set and fit, or neither.

@@ -55,6 +55,7 @@ export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, i
       temperature: data.meta.temperature ?? null,
       laboratory: data.meta.laboratory || null,
       notes: data.meta.notes || null,
+      couponOrientation: data.meta.couponOrientation ?? null,
       mapping: { ...columns, strainUnit: points.strainUnit, stressUnit: points.stressUnit },
       headers,
       warnings,

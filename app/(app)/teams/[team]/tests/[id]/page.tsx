@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 
+import { CouponOrientationView } from "@/components/records/coupon-orientation-view";
 import { CurveChart } from "@/components/records/curve-chart";
 import { getDb } from "@/db/index";
 import { findTestRecordPoints, findTestRecordSummary } from "@/db/queries/test-records";
@@ -57,6 +58,9 @@ export default async function TestRecordPage({
           ))}
         </dl>
       </div>
+      {record.couponOrientation ? (
+        <CouponOrientationView orientation={record.couponOrientation} />
+      ) : null}
       {record.warnings.map((w) => (
         <p key={w} className="mt-3 rounded bg-amber-50 px-3 py-2 text-sm text-amber-900">
           {w}

@@ -1,0 +1,1 @@
+ALTER TABLE "test_records" ADD COLUMN "coupon_orientation" jsonb;
