@@ -23,12 +23,14 @@ export class ComputeBusy extends AppError {
 }
 
 /** What the task was, in the words the message uses. */
-export type TaskLabel = "run" | "report" | "conformance check" | "fit replay" | "file reading";
+export type TaskLabel =
+  "run" | "report" | "conformance check" | "identification" | "fit replay" | "file reading";
 
 const ADVICE: Record<TaskLabel, string> = {
   run: "Try fewer increments (or fewer legs), or run the file on your own machine with the command-line driver (npm run drive).",
   report: "Try a path with fewer increments in this revision.",
   "conformance check": "Try a history with fewer rows.",
+  identification: "Try fewer or shorter test records.",
   "fit replay": "Try fewer or shorter test records.",
   "file reading": "Try a smaller file.",
 };

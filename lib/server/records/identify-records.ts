@@ -2,12 +2,13 @@ import "server-only";
 
 import type { Db } from "@/db/client";
 import { DEMO_PARAMS } from "@/lib/calibration/demo-curves";
-import { identify, type IdentifyResult } from "@/lib/calibration/identify";
+import type { IdentifyResult } from "@/lib/calibration/identify";
 import { identifiedFrame } from "@/lib/calibration/identify-frame";
 import type { Actor } from "@/lib/server/accounts/actor";
 import type { MaterialParams } from "@/lib/mechanics/types";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import { authorizeTeam } from "@/lib/server/access/team-access";
+import { compute } from "@/lib/server/compute/pool";
 import { parseWithPath } from "@/lib/server/workspace/parse";
 
 import { identifyRequestSchema } from "./fit-schema";
@@ -20,14 +21,27 @@ export type IdentifyResponse = IdentifyResult & {
 
 type IdentifyData = ReturnType<typeof identifyRequestSchema.parse>;
 
-/** spec E on loaded records; the base fills what the records do not inform. */
-export function runIdentify(records: LoadedRecord[], data: IdentifyData): IdentifyResponse {
+/**
+ * spec E on loaded records; the base fills what the records do not inform. The identification
+ * itself (loops, fits, replays through the driver) runs in the compute pool with `person`'s caps
+ * and budget; the notes and the coupons' frame are put together here.
+ */
+export async function runIdentify(
+  person: string,
+  records: LoadedRecord[],
+  data: IdentifyData,
+): Promise<IdentifyResponse> {
   const base: MaterialParams = data.base
     ? toMaterialParams(data.base as ParameterSet)
     : { ...DEMO_PARAMS };
-  const result = identify(
-    records.map((r) => r.input),
-    { base, law: data.law, modulus: data.modulus },
+  const result = await compute<IdentifyResult>(
+    {
+      kind: "identify",
+      records: records.map((r) => r.input),
+      options: { base, law: data.law, modulus: data.modulus },
+    },
+    person,
+    "identification",
   );
   // The coupons' orientation states fix the damage frame (spec A.5), or say why they cannot.
   const frame = identifiedFrame(
@@ -61,5 +75,5 @@ export async function identifyRecords(db: Db, actor: Actor, teamSlug: string, in
   const ctx = await authorizeTeam(db, actor, teamSlug, "fit:run");
   const data = parseWithPath(identifyRequestSchema, input);
   const records = await loadRecordsForFit(db, ctx.team.id, data.recordIds);
-  return runIdentify(records, data);
+  return runIdentify(ctx.actor.id, records, data);
 }

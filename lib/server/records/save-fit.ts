@@ -42,7 +42,7 @@ async function fitOutcome(
 ): Promise<Outcome> {
   if (data.method === "identify") {
     // The server identifies again: what is saved is what the stored records give, not a claim.
-    const result = runIdentify(records, data);
+    const result = await runIdentify(person, records, data);
     return {
       params: result.params,
       reports: result.records,

@@ -6,6 +6,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
+import * as identifyRoute from "@/app/api/v1/teams/[team]/fits/identify/route";
 import * as fitsRoute from "@/app/api/v1/teams/[team]/fits/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
 import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
@@ -134,6 +135,22 @@ describe("request-thread callers go through the compute pool", () => {
     expect(free.body.residuals).toHaveLength(1);
     expect(free.body.residuals[0]).toMatchObject({ id: record.id });
     expect(free.body.residuals[0].rms).toBeGreaterThan(0);
+  });
+
+  it("identification: the loops are fitted in the pool", async () => {
+    const record = await uploadTestRecord(db, w.members.editor, w.slug, uploadBody(DEMO_CSV));
+    const cookie = (await cookieFor(db, w.members.editor))!;
+    const run = () =>
+      callRoute(identifyRoute.POST, {
+        method: "POST",
+        params: { team: w.slug },
+        cookie,
+        body: { recordIds: [record.id] },
+      });
+    const { held, free } = await whileHeldThenFree(w.members.editor.id, run);
+    expectBusy(held);
+    expect(free.status).toBe(200);
+    expect(free.body.records[0].loops.length).toBeGreaterThan(0);
   });
 
   it("calibration report: the curves are computed in the pool", async () => {

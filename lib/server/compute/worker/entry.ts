@@ -4,6 +4,7 @@
  * not from the queue, runs the task, and sends expected errors as data: an AppError's class and
  * fields do not survive the thread boundary.
  */
+import { identify } from "@/lib/calibration/identify";
 import { uncertaintyAt } from "@/lib/calibration/refine";
 import { replayError, canReplay } from "@/lib/calibration/replay";
 import { readCurveCsv } from "@/lib/csv/read-curve-csv";
@@ -53,6 +54,8 @@ function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
           const rms = Number.isFinite(squared) && n > 0 ? Math.sqrt(squared / n) : -1;
           return { id: r.id, rms, points: n };
         });
+    case "identify":
+      return identify(task.records, task.options);
     case "fit-uncertainty":
       return uncertaintyAt(task.records, task.params, { free: task.free, bounds: task.bounds });
     case "read-curve-csv":

@@ -4,6 +4,7 @@
  */
 import type { MessagePort } from "node:worker_threads";
 
+import type { IdentifyOptions } from "@/lib/calibration/identify";
 import type { Bounds, FittableParam } from "@/lib/calibration/refine-params";
 import type { RecordPoints, TestRecordInput } from "@/lib/calibration/types";
 import type { CsvError } from "@/lib/csv/csv-error";
@@ -32,6 +33,7 @@ export type ComputeTask =
       params: MaterialParams;
       records: { id: string; input: { testType: TestType; points: RecordPoints } }[];
     }
+  | { kind: "identify"; records: TestRecordInput[]; options: IdentifyOptions }
   | {
       kind: "fit-uncertainty";
       params: MaterialParams;
