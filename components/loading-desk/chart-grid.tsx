@@ -11,6 +11,7 @@ import {
   stressStrainDef,
 } from "@/lib/client/loading-desk/chart-defs";
 import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
+import { DEFAULT_DESK_CHARTS, type DeskCharts } from "@/lib/scenario/desk-extras";
 import { withXAxis, type XAxisChoice } from "@/lib/client/loading-desk/chart-x-axis";
 import {
   setIncrementCursor,
@@ -29,6 +30,9 @@ export interface ChartGridProps {
   revision?: string | null;
   totalIncrements: number;
   overlays?: readonly ChartOverlay[];
+  /** The chart choices kept with the scenario; without them the grid keeps its own. */
+  choices?: DeskCharts;
+  onChoices?: (choices: DeskCharts) => void;
 }
 
 const pickCls = "rounded border border-glaze-line bg-white px-1 py-0.5 text-xs";
@@ -41,11 +45,21 @@ export function ChartGrid({
   revision = null,
   totalIncrements,
   overlays,
+  choices,
+  onChoices,
 }: ChartGridProps) {
-  const [x, setX] = useState<StrainComponent>("eps11");
-  const [y, setY] = useState<StressComponent>("sig11");
+  const [own, setOwn] = useState<DeskCharts>(DEFAULT_DESK_CHARTS);
+  const current = choices ?? own;
+  const choose = onChoices ?? setOwn;
+  const { strain: x, stress: y } = current.stressStrain;
   // Each fixed chart's horizontal axis by chart key; absent = the chart's default.
-  const [xOf, setXOf] = useState<Record<string, XAxisChoice>>({});
+  const xOf: Record<string, XAxisChoice> = current.horizontal;
+  const setX = (strain: StrainComponent) =>
+    choose({ ...current, stressStrain: { ...current.stressStrain, strain } });
+  const setY = (stress: StressComponent) =>
+    choose({ ...current, stressStrain: { ...current.stressStrain, stress } });
+  const setXOf = (key: string, axis: XAxisChoice) =>
+    choose({ ...current, horizontal: { ...current.horizontal, [key]: axis } });
   const [cursor, setCursor] = useIncrementCursor();
   // The cursor belongs to this desk: leaving the page must not carry it to the next scenario.
   useEffect(() => () => setIncrementCursor(null), []);
@@ -98,7 +112,7 @@ export function ChartGrid({
               <XAxisSelect
                 value={def.xAxis}
                 choices={FIXED_CHARTS[k].xChoices}
-                onChange={(c) => setXOf((m) => ({ ...m, [def.key]: c }))}
+                onChange={(c) => setXOf(def.key, c)}
               />
             }
             {...common}

@@ -7,6 +7,7 @@ import { expandPathDoc } from "@/lib/scenario/path-text/path-doc";
 import { toMaterialParams, type ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import type { LibraryChoice } from "@/lib/client/sets/library-choice";
 import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
+import type { DeskOverlay } from "@/lib/scenario/desk-extras";
 import {
   fromScenario,
   type OpenedScenario,
@@ -33,7 +34,8 @@ import { useUrlSync } from "./use-url-sync";
 export interface LoadingDeskProps {
   /**
    * The scenario to open, validated (parseScenarioFile): the sandbox default, a link, a saved
-   * revision. Its top-level "desk" field (files written before the rename: "loading desk"), if present, restores the path text and hidden sets.
+   * revision. Its top-level "desk" field (files written before the rename: "workbench"), if present, restores the path text, hidden sets,
+   * test records and chart choices.
    */
   initialScenario: OpenedScenario;
   readOnly?: boolean;
@@ -47,8 +49,13 @@ export interface LoadingDeskProps {
   onSignIn?: (file: ScenarioFileJson) => void;
   /** Keep the state in the address so it can be sent as a link (the sandbox). */
   syncUrl?: boolean;
-  /** Measured curves drawn over the chart whose axes they match (test records); not saved. */
+  /** Measured curves drawn over the chart whose axes they match (test records). */
   overlays?: readonly ChartOverlay[];
+  /**
+   * Which test records are drawn, when the page around the desk chooses them (the scenario
+   * editor); saved in the file's desk field. Without it the opened file's choice is kept as is.
+   */
+  overlayChoice?: readonly DeskOverlay[];
   /** Team library sets the set picker offers beside the presets. */
   library?: readonly LibraryChoice[];
   /** "revision 4" when a saved revision is open; stamped on exports. Null on scratch data. */
@@ -68,6 +75,7 @@ export function LoadingDesk({
   onSignIn,
   syncUrl,
   overlays,
+  overlayChoice,
   library,
   revision = null,
   unsaved,
@@ -79,7 +87,10 @@ export function LoadingDesk({
   const [linkNote, setLinkNote] = useState("");
   const legs = useMemo(() => (m.doc.items.length ? expandPathDoc(m.doc) : null), [m.doc]);
   const store = useSolverRuns(m.entries, legs);
-  const file = useMemo(() => toScenarioFile(m, m.doc), [m]);
+  const file = useMemo(
+    () => toScenarioFile(overlayChoice ? { ...m, overlays: [...overlayChoice] } : m, m.doc),
+    [m, overlayChoice],
+  );
   useUrlSync(file, !!syncUrl);
   useEffect(() => onFileChange?.(file), [file, onFileChange]);
   const active = m.entries.find((e) => e.set.id === m.activeId) ?? m.entries[0];
@@ -204,6 +215,8 @@ export function LoadingDesk({
               revision={revision}
               totalIncrements={totalIncrements}
               overlays={overlays}
+              choices={m.charts}
+              onChoices={(charts) => dispatch({ type: "charts", charts })}
             />
           </Panel>
           <Panel id="table" title="Results table">

@@ -5,17 +5,19 @@ import { messageOf } from "@/lib/client/data/api-fetch";
 import { useTestRecords } from "@/lib/client/data/use-test-records";
 import { STRAIN_LABEL, STRESS_LABEL } from "@/lib/client/loading-desk/chart-defs";
 import { testTypeWords } from "@/lib/csv/test-type-words";
+import type { DeskOverlay } from "@/lib/scenario/desk-extras";
 
 export interface RecordOverlayPickerProps {
   slug: string;
-  selected: string[];
-  onChange: (ids: string[]) => void;
+  /** The records drawn, by id with the name they had when chosen. */
+  selected: readonly DeskOverlay[];
+  onChange: (records: DeskOverlay[]) => void;
   /** How the chosen records' points are coming along. */
   loading: boolean;
   errors: string[];
 }
 
-/** Tick team test records to draw over the stress–strain chart; kept only while the page is open. */
+/** Tick team test records to draw over the stress–strain chart; saved with the next revision. */
 export function RecordOverlayPicker({
   slug,
   selected,
@@ -25,8 +27,13 @@ export function RecordOverlayPicker({
 }: RecordOverlayPickerProps) {
   const list = useTestRecords(slug);
   const records = list.data?.items ?? [];
-  const toggle = (id: string) =>
-    onChange(selected.includes(id) ? selected.filter((s) => s !== id) : [...selected, id]);
+  const isChosen = (id: string) => selected.some((s) => s.recordId === id);
+  const toggle = (id: string, name: string) =>
+    onChange(
+      isChosen(id)
+        ? selected.filter((s) => s.recordId !== id)
+        : [...selected, { recordId: id, name }],
+    );
 
   return (
     <details className="rounded-lg border border-glaze-line bg-white/60 px-3 py-2 text-sm">
@@ -38,8 +45,8 @@ export function RecordOverlayPicker({
         </span>
       </summary>
       <p className="mt-2 text-xs text-ink-faint">
-        A record is drawn dotted as “test: name” when the stress–strain chart shows its pair; these
-        choices are not saved with the revision.
+        A record is drawn dotted as “test: name” when the stress–strain chart shows its pair; the
+        choice is saved with the next revision.
       </p>
       {list.isError ? <p className="mt-2 text-kiln-dark">{messageOf(list.error)}</p> : null}
       {errors.map((e, i) => (
@@ -59,8 +66,8 @@ export function RecordOverlayPicker({
                 <input
                   type="checkbox"
                   disabled={!axes}
-                  checked={selected.includes(r.id)}
-                  onChange={() => toggle(r.id)}
+                  checked={isChosen(r.id)}
+                  onChange={() => toggle(r.id, r.name)}
                 />
                 <span>
                   {r.name} — {testTypeWords(r.testType, true)}, {r.loading}

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 
 import { LoadingDesk } from "@/components/loading-desk/loading-desk";
 import type { OpenedScenario, ScenarioFileJson } from "@/lib/client/loading-desk/scenario-state";
@@ -11,9 +11,11 @@ import { teamPages } from "@/lib/client/data/api-urls";
 import { type SaveConflict, saveConflictOf } from "@/lib/client/data/conflict";
 import { useSaveRevision } from "@/lib/client/data/use-save-revision";
 import { useRecordOverlays } from "@/lib/client/data/use-test-records";
+import { type DeskOverlay, readDeskOverlays } from "@/lib/scenario/desk-extras";
 
 import { ConflictPanel } from "./conflict-panel";
 import { DraftOffer } from "./draft-offer";
+import { MissingRecordsNotice } from "./missing-records-notice";
 import { RecordOverlayPicker } from "./record-overlay-picker";
 import { SaveRevisionForm } from "./save-revision-form";
 import { useKeptDraft } from "./use-kept-draft";
@@ -45,21 +47,25 @@ export function ScenarioEditor({
   const [conflict, setConflict] = useState<SaveConflict | null>(null);
   const [message, setMessage] = useState("");
   const [error, setError] = useState<string | null>(null);
-  // Which test records are drawn over the charts: a way of looking, not part of the revision.
-  const [recordIds, setRecordIds] = useState<string[]>([]);
-  const records = useRecordOverlays(slug, recordIds);
   const library = useLibraryChoices(slug);
   // A restored draft reopens the desk on the kept file; the saved revision stays the baseline.
   const [opened, setOpened] = useState<{ scenario: OpenedScenario; key: number }>({
     scenario: file,
     key: 0,
   });
+  // Which test records are drawn over the charts: part of the revision (its desk field).
+  const [chosen, setChosen] = useState<DeskOverlay[]>(() => readDeskOverlays(file.desk));
+  const recordIds = useMemo(() => chosen.map((c) => c.recordId), [chosen]);
+  const records = useRecordOverlays(slug, recordIds);
+  const missing = records.missing.flatMap((k) => (chosen[k] ? [chosen[k]] : []));
   const draft = useKeptDraft({ team: slug, scenarioId, baseRevision: number }, file, editable);
   useLeaveGuard(editable && draft.unsaved);
 
   const restoreDraft = () => {
     const scenario = draft.restore();
-    if (scenario) setOpened((o) => ({ scenario, key: o.key + 1 }));
+    if (!scenario) return;
+    setOpened((o) => ({ scenario, key: o.key + 1 }));
+    setChosen(readDeskOverlays(scenario.desk));
   };
 
   const submit = (base: number, text: string) => {
@@ -133,12 +139,24 @@ export function ScenarioEditor({
       <div className="mx-auto max-w-[1600px] px-4">
         <RecordOverlayPicker
           slug={slug}
-          selected={recordIds}
-          onChange={setRecordIds}
+          selected={chosen}
+          onChange={setChosen}
           loading={records.loading}
           errors={records.errors}
         />
       </div>
+      {missing.length ? (
+        <div className="mx-auto max-w-[1600px] px-4">
+          <MissingRecordsNotice
+            records={missing}
+            onForget={
+              editable
+                ? (id) => setChosen((list) => list.filter((c) => c.recordId !== id))
+                : undefined
+            }
+          />
+        </div>
+      ) : null}
       <LoadingDesk
         key={opened.key}
         library={library}
@@ -149,6 +167,7 @@ export function ScenarioEditor({
         onFileChange={draft.report}
         onSave={editable ? (f) => setPending(f) : undefined}
         overlays={records.overlays}
+        overlayChoice={chosen}
         revision={`revision ${number}`}
       />
     </div>

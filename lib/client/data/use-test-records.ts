@@ -6,7 +6,7 @@ import type { TestRecordListResponse, TestRecordResponse } from "@/lib/server/re
 import { recordOverlay } from "@/lib/client/loading-desk/record-overlay";
 import type { ChartOverlay } from "@/lib/client/loading-desk/chart-overlays";
 
-import { apiFetch, messageOf } from "./api-fetch";
+import { ApiError, apiFetch, messageOf } from "./api-fetch";
 import { teamApi } from "./api-urls";
 import { workspaceKeys } from "./query-keys";
 
@@ -22,14 +22,19 @@ export interface RecordOverlays {
   overlays: ChartOverlay[];
   loading: boolean;
   errors: string[];
+  /** Positions (in the chosen order) of records the team does not hold: deleted, or never here. */
+  missing: number[];
 }
+
+const isGone = (error: unknown) => error instanceof ApiError && error.status === 404;
 
 // Module-level so TanStack Query keeps the combined result between renders while nothing changed.
 function combine(results: UseQueryResult<ChartOverlay | null>[]): RecordOverlays {
   return {
     overlays: results.flatMap((r) => (r.data ? [r.data] : [])),
     loading: results.some((r) => r.isPending),
-    errors: results.flatMap((r) => (r.error ? [messageOf(r.error)] : [])),
+    errors: results.flatMap((r) => (r.error && !isGone(r.error) ? [messageOf(r.error)] : [])),
+    missing: results.flatMap((r, k) => (isGone(r.error) ? [k] : [])),
   };
 }
 

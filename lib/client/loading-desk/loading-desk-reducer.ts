@@ -1,11 +1,12 @@
 /**
  * State of one desk: scenario name, parameter sets, the path (text plus the last valid
  * path object, so the charts keep the last good curves while the text has an error), the set
- * being edited, and an epoch that changes when the whole state is replaced (import, link).
+ * being edited, the test records and chart choices saved with it, and an epoch that changes when the whole state is replaced (import, link).
  */
 import { formatPathText } from "@/lib/scenario/path-text/format-path-text";
 import type { PathDoc } from "@/lib/scenario/path-text/path-doc";
 import { type PathTextError, parsePathText } from "@/lib/scenario/path-text/parse-path-text";
+import { DEFAULT_DESK_CHARTS, type DeskCharts, type DeskOverlay } from "@/lib/scenario/desk-extras";
 import type { LoadingDeskState } from "./scenario-state";
 import { type SetAction, type SetEntry, setListReducer } from "./set-list";
 
@@ -17,6 +18,8 @@ export interface LoadingDeskModel {
   pathErrors: PathTextError[];
   activeId: string;
   epoch: number;
+  overlays: DeskOverlay[];
+  charts: DeskCharts;
 }
 
 export type LoadingDeskAction =
@@ -25,6 +28,8 @@ export type LoadingDeskAction =
   | { type: "pathText"; text: string }
   | { type: "pathDoc"; doc: PathDoc }
   | { type: "select"; id: string }
+  | { type: "overlays"; overlays: DeskOverlay[] }
+  | { type: "charts"; charts: DeskCharts }
   | { type: "replace"; state: LoadingDeskState };
 
 export function initModel(state: LoadingDeskState, epoch = 0): LoadingDeskModel {
@@ -37,6 +42,8 @@ export function initModel(state: LoadingDeskState, epoch = 0): LoadingDeskModel 
     pathErrors: parsed.ok ? [] : parsed.errors,
     activeId: state.entries[0]?.set.id ?? "A",
     epoch,
+    overlays: state.overlays ?? [],
+    charts: state.charts ?? DEFAULT_DESK_CHARTS,
   };
 }
 
@@ -63,6 +70,10 @@ export function loadingDeskReducer(m: LoadingDeskModel, a: LoadingDeskAction): L
       return { ...m, doc: a.doc, pathText: formatPathText(a.doc), pathErrors: [] };
     case "select":
       return m.entries.some((e) => e.set.id === a.id) ? { ...m, activeId: a.id } : m;
+    case "overlays":
+      return { ...m, overlays: a.overlays };
+    case "charts":
+      return { ...m, charts: a.charts };
     case "replace":
       return initModel(a.state, m.epoch + 1);
   }

@@ -5,6 +5,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 
 import { RecordOverlayPicker } from "@/components/scenarios/record-overlay-picker";
 import { useRecordOverlays } from "@/lib/client/data/use-test-records";
+import type { DeskOverlay } from "@/lib/scenario/desk-extras";
 
 const summary = (id: string, name: string, testType: string) => ({
   id,
@@ -24,14 +25,17 @@ const POINTS = { strain: [0, 0.001, 0.002], stress: [0, 9, 17] };
 
 /** The picker and the overlays hook wired as the scenario page wires them. */
 function Harness() {
-  const [ids, setIds] = useState<string[]>([]);
-  const records = useRecordOverlays("lab", ids);
+  const [chosen, setChosen] = useState<DeskOverlay[]>([]);
+  const records = useRecordOverlays(
+    "lab",
+    chosen.map((c) => c.recordId),
+  );
   return (
     <>
       <RecordOverlayPicker
         slug="lab"
-        selected={ids}
-        onChange={setIds}
+        selected={chosen}
+        onChange={setChosen}
         loading={records.loading}
         errors={records.errors}
       />
@@ -50,8 +54,8 @@ function mockApi() {
     if (url === "/api/v1/teams/lab/test-records/r1")
       return Response.json({ ...LIST.items[0], points: POINTS });
     return Response.json(
-      { error: { code: "not_found", message: "That test record is gone." } },
-      { status: 404 },
+      { error: { code: "internal", message: "The record's points could not be read." } },
+      { status: 500 },
     );
   });
   vi.stubGlobal("fetch", fetchMock);
@@ -104,7 +108,7 @@ describe("test records over the loading desk charts", () => {
     mockApi();
     mount();
     fireEvent.click(await screen.findByRole("checkbox", { name: /S1 coupon/ }));
-    expect(await screen.findByText("That test record is gone.")).toBeTruthy();
+    expect(await screen.findByText("The record's points could not be read.")).toBeTruthy();
     expect(screen.getByTestId("overlays").textContent).toBe("");
   });
 });

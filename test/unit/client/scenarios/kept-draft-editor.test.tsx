@@ -18,7 +18,7 @@ vi.mock("@/components/scenarios/record-overlay-picker", () => ({
 }));
 vi.mock("@/lib/client/data/use-library-choices", () => ({ useLibraryChoices: () => [] }));
 vi.mock("@/lib/client/data/use-test-records", () => ({
-  useRecordOverlays: () => ({ overlays: [], loading: false, errors: [] }),
+  useRecordOverlays: () => ({ overlays: [], loading: false, errors: [], missing: [] }),
 }));
 const mutate = vi.fn();
 vi.mock("@/lib/client/data/use-save-revision", () => ({
