@@ -18,6 +18,7 @@ import {
 import { comparisonRoses, densityPicture } from "@/lib/calibration/micromechanics/roses";
 
 import { PolarPicture } from "./polar-picture";
+import { orientationSandboxLink } from "@/lib/client/sets/orientation-scenario";
 
 /** What "Use as parameter set" hands on: the constants, the damage frame and where they came from. */
 export interface OrientedEstimate {
@@ -229,6 +230,19 @@ export function OrientationSection({
           >
             Use as parameter set
           </Button>
+          <a
+            className="ml-3 text-sm text-verdigris-dark hover:underline"
+            href={orientationSandboxLink(result.stack)}
+            target="_blank"
+            rel="noopener"
+          >
+            Open in the sandbox
+          </a>
+          <p className="text-xs text-ink-soft">
+            The sandbox opens this state&apos;s E1, E2, nu12, G12 and thetaD over the invented demo
+            set&apos;s damage values, beside the demo set, on tension → unload → compression and
+            growing cycles; signed in, &ldquo;Save to team…&rdquo; keeps it as a scenario.
+          </p>
         </>
       ) : null}
     </section>

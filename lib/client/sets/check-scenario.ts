@@ -7,7 +7,7 @@ import { parsePathText } from "@/lib/scenario/path-text/parse-path-text";
 import { type ScenarioFileJson, toScenarioFile } from "@/lib/client/loading-desk/scenario-state";
 import { setListReducer } from "@/lib/client/loading-desk/set-list";
 
-const CHECK_PATH_TEXT =
+export const CHECK_PATH_TEXT =
   "# tension → unload → compression: does the damage close in compression?\n" +
   "e11=1% in 100\n" +
   "s11=0 in 50     # unload to zero stress\n" +
