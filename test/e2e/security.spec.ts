@@ -134,6 +134,35 @@ describe("security headers and hostile text", () => {
     await context.close();
   });
 
+  it("slows mistyped sign-ins down and never locks the owner out (issue 12 item 3)", async () => {
+    // Seven wrong passwords for one account from this address: the answer stays the same words
+    // and comes later each time past the fifth (0.5 s, 1 s), and the right password still opens.
+    const context = await newContext(browser);
+    const page = await context.newPage();
+    await page.goto("/sign-in");
+    const email = page.getByLabel("E-mail address");
+    const password = page.getByLabel("Password");
+    const waits: number[] = [];
+    for (let k = 0; k < 7; k++) {
+      await email.fill("owner@demo.craquelure.local");
+      await password.fill(`not-the-password-${k}`);
+      const t0 = Date.now();
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.getByText("That e-mail and password do not match an account.").waitFor();
+      waits.push(Date.now() - t0);
+      await page.reload();
+    }
+    expect(await page.getByText(/Too many/).count()).toBe(0);
+    // the sixth and seventh waited at least the throttle's 0.5 s and 1 s
+    expect(waits[5]).toBeGreaterThanOrEqual(450);
+    expect(waits[6]).toBeGreaterThanOrEqual(950);
+    await email.fill("owner@demo.craquelure.local");
+    await password.fill("demo-owner-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.waitForURL(/\/teams/);
+    await context.close();
+  });
+
   it("refuses a session cookie that was used again after signing out", async () => {
     const context = await newContext(browser);
     const page = await context.newPage();
