@@ -75,7 +75,11 @@ export function CalibrationWorkspace({
         base: estimate ? { ...DEMO_PARAMS, ...estimate, label: "" } : undefined,
         baseOrientation:
           estimate && estimateState
-            ? { closure: estimateState.closure, layers: estimateState.layers }
+            ? {
+                closure: estimateState.closure,
+                layers: estimateState.layers,
+                constituents: estimateState.constituents,
+              }
             : undefined,
       };
 

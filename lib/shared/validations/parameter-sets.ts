@@ -19,6 +19,17 @@ export const orientationProvenanceSchema = z.strictObject({
     .array(z.strictObject({ fraction: z.number(), a11: z.number(), a12: z.number() }))
     .min(1)
     .max(50),
+  /** the constituents the aligned ply came from (Halpin–Tsai), when the state was computed here */
+  constituents: z
+    .strictObject({
+      Ef: z.number(),
+      nuf: z.number(),
+      Em: z.number(),
+      num: z.number(),
+      Vf: z.number(),
+      aspect: z.number(),
+    })
+    .optional(),
 });
 
 export type OrientationProvenance = z.output<typeof orientationProvenanceSchema>;

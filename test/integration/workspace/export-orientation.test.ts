@@ -25,6 +25,8 @@ const stack = {
     { fraction: 0.5, a11: 0.2, a12: 0 },
     { fraction: 0.25, a11: 0.8, a12: 0 },
   ],
+  // issue 19 item 2: the provenance keeps the constituents the ply came from (invented values)
+  constituents: { Ef: 72000, nuf: 0.22, Em: 3000, num: 0.35, Vf: 0.168, aspect: 500 },
 };
 
 describe("the team export carries the orientation tensors with the sets (issue 19 item 4)", () => {
