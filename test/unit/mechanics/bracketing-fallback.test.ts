@@ -1,7 +1,8 @@
 /** Spec damage-law.md C.5: bracketing fallback before a step is rejected; no false limit loads. */
 import { describe, expect, it } from "vitest";
 import { localStepFrom } from "@/lib/mechanics/single-step";
-import { D1 } from "@/lib/mechanics/state";
+import { D1, D2, SIG, STATE_SIZE } from "@/lib/mechanics/state";
+import { LocalStepper } from "@/lib/mechanics/local-step";
 import { PathRun } from "@/lib/mechanics/driver";
 import { compileMaterial } from "@/lib/mechanics/material";
 import { ReducedProblem } from "@/lib/mechanics/reduced-newton";
@@ -73,5 +74,63 @@ describe("the bracketing fallback alone (C.5) finds the equilibrium root", () =>
     pb.tgt = Float64Array.from([u.eps0 + 0.08 * u.k, 0, 0]);
     pb.evaluate(0, 0);
     expect(pb.solveBracketing(0.05)).toBe(false);
+  });
+});
+
+describe("a local step whose Newton and fixed point both miss still converges (C.5)", () => {
+  // No admissible path found so far makes both iterations miss (24,000 random and targeted
+  // paths searched), so the miss is injected: the stepper's own solvers are made to report
+  // failure, and only the bracketing fallback of C.5 can still accept the increment. Without
+  // the fallback this step would be rejected, sub-stepped to hmin and reported as a limit load.
+  function kinkIncrement() {
+    // the closure-kink path above, stopped one increment before sig11 changes sign
+    const p = new PathRun(DEMO, [
+      leg([E, S, S], [0.01, 0, 0], 100),
+      leg([S, S, S], [-10, 60, 0], 120),
+    ]);
+    p.advance(100);
+    const s0 = p.currentState()[SIG];
+    let before = p.currentState();
+    for (let i = 101; i <= 220; i++) {
+      p.advance(1);
+      const after = p.currentState();
+      if (before[SIG] > 0 && after[SIG] <= 0) {
+        const t = (i - 100) / 120;
+        return { before, target: [s0 + (-10 - s0) * t, 60 * t, 0] };
+      }
+      before = after;
+    }
+    throw new Error("the path did not cross sig11 = 0");
+  }
+
+  it("gives the state Newton gives, to round-off, when Newton and the fixed point are disabled", () => {
+    const { before, target } = kinkIncrement();
+    const m = compileMaterial(DEMO);
+    const normal = new LocalStepper(m);
+    const expected = new Float64Array(STATE_SIZE);
+    expect(normal.step(before, 0, Float64Array.from(target), expected, false)).toBe(true);
+    expect(expected[D2]).toBeGreaterThan(before[D2]); // family 2 grows in this increment
+
+    const crippled = new LocalStepper(m);
+    crippled.problem.solveNewton = () => false;
+    crippled.problem.solveFixedPoint = () => false;
+    const got = new Float64Array(STATE_SIZE);
+    expect(crippled.step(before, 0, Float64Array.from(target), got, false)).toBe(true);
+    expect(crippled.rejection).toBe("");
+    expectRel(got[D1], expected[D1], 1e-9);
+    expectRel(got[D2], expected[D2], 1e-9);
+    for (let k = 0; k < 3; k++)
+      expect(Math.abs(got[SIG + k] - expected[SIG + k])).toBeLessThanOrEqual(1e-9 * 72);
+  });
+
+  it("is rejected as 'newton' when no root lies within the Δd limit either", () => {
+    const { before } = kinkIncrement();
+    const crippled = new LocalStepper(compileMaterial(DEMO));
+    crippled.problem.solveNewton = () => false;
+    crippled.problem.solveFixedPoint = () => false;
+    const out = new Float64Array(STATE_SIZE);
+    // far past the peak along 2 (D.4's sigma_max = 79.5 MPa for the virgin point): no equilibrium
+    expect(crippled.step(before, 0, Float64Array.from([0, 200, 0]), out, false)).toBe(false);
+    expect(crippled.rejection).toBe("newton");
   });
 });
