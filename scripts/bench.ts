@@ -10,6 +10,7 @@
  */
 import { performance } from "node:perf_hooks";
 import { DEMO_SMC } from "../lib/mechanics/demo-set";
+import { SET_A } from "../test/fixtures/set-a";
 import { runPath } from "../lib/mechanics/driver";
 import { RESULT_COLUMNS, type Leg, type MaterialParams } from "../lib/mechanics/types";
 
@@ -19,22 +20,7 @@ const RUNS = 5;
 const DEMO: MaterialParams = DEMO_SMC;
 
 /** An orthotropic short-fibre set (spec D.14 set A) with its damage axes at 30° to the load axes. */
-const ROTATED: MaterialParams = {
-  ...DEMO,
-  E1: 9000,
-  E2: 6000,
-  nu12: 0.35,
-  G12: 2500,
-  Y0_1: 0.02,
-  Y0_2: 0.03,
-  a1: 0.5,
-  a2: 0.7,
-  alpha: 0.004,
-  beta: 0.006,
-  b: 0.4,
-  k6: 0.8,
-  thetaD: 30,
-};
+const ROTATED: MaterialParams = { ...SET_A, thetaD: 30 };
 
 interface Case {
   name: "elastic" | "damaging" | "biaxial";

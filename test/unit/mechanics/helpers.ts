@@ -26,25 +26,8 @@ export const DEMO: MaterialParams = {
   onFailure: "stop",
 };
 
-/**
- * Spec D.14 "set A": an orthotropic set with distinct axes, the one definition every test uses
- * (on the demo set's remaining values).
- */
-export const SET_A: MaterialParams = {
-  ...DEMO,
-  E1: 9000,
-  E2: 6000,
-  nu12: 0.35,
-  G12: 2500,
-  Y0_1: 0.02,
-  Y0_2: 0.03,
-  a1: 0.5,
-  a2: 0.7,
-  alpha: 0.004,
-  beta: 0.006,
-  b: 0.4,
-  k6: 0.8,
-};
+/** Spec D.14 "set A": one definition, in test/fixtures (the core bench reads it too). */
+export { SET_A } from "../../fixtures/set-a";
 
 export const S: ControlKind = "stress";
 export const E: ControlKind = "strain";
