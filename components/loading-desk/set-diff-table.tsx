@@ -51,12 +51,12 @@ export function SetDiffTable({ entries }: SetDiffTableProps) {
             key={r.symbol}
             className={`border-t border-glaze-line/60 ${r.differs ? "bg-kiln-light/50 font-semibold" : "text-ink-soft"}`}
           >
-            <th scope="row" className="py-0.5 text-left font-normal">
+            <th scope="row" className="py-0.5 text-left font-normal" title={r.label}>
               {r.symbol}
             </th>
-            {/* Fitted values carry all their digits: wrap them inside the cell, never over the next. */}
-            <td className="break-all pr-1 font-mono">{r.left}</td>
-            <td className="break-all pr-1 font-mono">{r.right}</td>
+            {/* Choices read as words and may be long: wrap them inside the cell, never over the next. */}
+            <td className="break-words pr-1 font-mono">{r.left}</td>
+            <td className="break-words pr-1 font-mono">{r.right}</td>
             <td className="whitespace-nowrap text-right font-mono">
               {r.differs
                 ? r.relative === null

@@ -61,5 +61,17 @@ describe("diff of two sets", () => {
     expect(rows.map((r) => r.symbol)).toEqual(["Y0_1", "law"]);
     expect(rows[0].relative).toBeCloseTo(0.2, 12);
     expect(rows[1].relative).toBeNull();
+    // choices in the desk's words, not the file's codes (issue 16)
+    expect(rows[1].left).toBe("d linear in √Ȳ");
+    expect(rows[1].right).toBe("d linear in Ȳ");
+  });
+
+  it("shows numbers to the desk's six significant digits, flagging a difference beyond them", () => {
+    const a = { ...base, id: "A", E1: 10994.028523930534 } as ParameterSet;
+    const b = { ...base, id: "B", E1: 10994.028523930534 + 1e-9 } as ParameterSet;
+    const row = diffSets(a, b).find((r) => r.symbol === "E1")!;
+    expect(row.left).toBe("10994");
+    expect(row.differs).toBe(true);
+    expect(row.label).toBe("Young's modulus, axis 1");
   });
 });
