@@ -142,3 +142,20 @@ export async function findParameterSetIdByName(db: Executor, teamId: string, nam
     .where(and(eq(parameterSets.teamId, teamId), eq(parameterSets.name, name)));
   return existing;
 }
+
+/** The stored versions of a team's sets with author ids, for the team export; oldest first. */
+export async function listTeamSetVersionRows(db: Executor, teamId: string) {
+  return db
+    .select({
+      setId: parameterSetVersions.setId,
+      version: parameterSetVersions.version,
+      values: parameterSetVersions.values,
+      provenance: parameterSetVersions.provenance,
+      createdBy: parameterSetVersions.createdBy,
+      createdAt: parameterSetVersions.createdAt,
+    })
+    .from(parameterSetVersions)
+    .innerJoin(parameterSets, eq(parameterSets.id, parameterSetVersions.setId))
+    .where(eq(parameterSets.teamId, teamId))
+    .orderBy(asc(parameterSetVersions.setId), asc(parameterSetVersions.version));
+}

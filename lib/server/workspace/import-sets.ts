@@ -67,15 +67,6 @@ export function importedSetRows(
 
 /** The file's versions of a set, oldest first; undefined when the file has none. */
 function historyOf(s: ExportSet) {
-  const list = (s as { versions?: ExportVersion[] }).versions;
-  if (!list || list.length === 0) return undefined;
-  return [...list].sort((a, b) => a.version - b.version);
-}
-
-interface ExportVersion {
-  version: number;
-  values: Record<string, unknown>;
-  provenance: unknown;
-  createdBy: ExportPerson;
-  createdAt: string;
+  if (!s.versions || s.versions.length === 0) return undefined;
+  return [...s.versions].sort((a, b) => a.version - b.version);
 }

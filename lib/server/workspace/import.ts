@@ -32,7 +32,9 @@ export interface TeamImportResponse {
  */
 function authorsIn(doc: TeamExport): string[] {
   const all: ExportPerson[] = [];
-  for (const s of doc.parameterSets) all.push(s.createdBy, s.updatedBy);
+  for (const s of doc.parameterSets) {
+    all.push(s.createdBy, s.updatedBy, ...(s.versions ?? []).map((v) => v.createdBy));
+  }
   for (const s of doc.scenarios) {
     all.push(s.createdBy, ...s.revisions.map((r) => r.author));
   }
