@@ -8,6 +8,7 @@ import { allValues, keyValues, provenanceText } from "@/lib/client/data/paramete
 import type { ParameterSetListResponse } from "@/lib/client/data/types";
 import { useDeleteParameterSet, useParameterSets } from "@/lib/client/data/use-parameter-sets";
 
+import { EditSetValues } from "./edit-set-values";
 import { ParameterSetActions } from "./parameter-set-actions";
 import { ParameterSetVersions } from "./parameter-set-versions";
 
@@ -122,6 +123,7 @@ function ParameterSetRow({ slug, set, canEdit, open, onToggle, onDelete }: Param
                 {set.provenance.note}
               </p>
             ) : null}
+            {canEdit ? <EditSetValues slug={slug} set={set} /> : null}
             <ParameterSetVersions slug={slug} setId={set.id} />
           </td>
         </tr>

@@ -36,6 +36,19 @@ export function useRenameParameterSet(slug: string) {
   });
 }
 
+/** New values are a new version of the set (the server keeps the previous one). */
+export function useEditParameterSetValues(slug: string) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, values }: { id: string; values: Record<string, unknown> }) =>
+      apiFetch<ParameterSetResponse>(teamApi(slug).parameterSet(id), {
+        method: "PATCH",
+        body: { values },
+      }),
+    onSettled: () => client.invalidateQueries({ queryKey: workspaceKeys.parameterSets(slug) }),
+  });
+}
+
 export function useDeleteParameterSet(slug: string) {
   const client = useQueryClient();
   return useMutation({
