@@ -8,7 +8,9 @@ import { allValues, keyValues, provenanceText } from "@/lib/client/data/paramete
 import type { ParameterSetListResponse } from "@/lib/client/data/types";
 import { useDeleteParameterSet, useParameterSets } from "@/lib/client/data/use-parameter-sets";
 
+import { EditSetValues } from "./edit-set-values";
 import { ParameterSetActions } from "./parameter-set-actions";
+import { ParameterSetVersions } from "./parameter-set-versions";
 
 export interface ParameterSetsTableProps {
   slug: string;
@@ -78,7 +80,10 @@ function ParameterSetRow({ slug, set, canEdit, open, onToggle, onDelete }: Param
   return (
     <>
       <tr className="border-b border-glaze-line/70 align-top">
-        <td className="px-3 py-2 font-medium">{set.name}</td>
+        <td className="px-3 py-2 font-medium">
+          {set.name}
+          <div className="text-xs font-normal text-ink-faint">Version {set.version}</div>
+        </td>
         <td className="px-3 py-2 font-mono text-xs">
           {keyValues(set.values).map(([k, v]) => (
             <span key={k} className="mr-3 inline-block whitespace-nowrap">
@@ -118,6 +123,8 @@ function ParameterSetRow({ slug, set, canEdit, open, onToggle, onDelete }: Param
                 {set.provenance.note}
               </p>
             ) : null}
+            {canEdit ? <EditSetValues slug={slug} set={set} /> : null}
+            <ParameterSetVersions slug={slug} setId={set.id} />
           </td>
         </tr>
       ) : null}

@@ -11,7 +11,7 @@ export function ProvenanceList({ items }: { items: SetProvenance[] }) {
       {items.map((p) => (
         <li key={p.setId}>
           <span className="font-semibold">Set {p.setId}</span>: {p.kind}
-          {p.libraryName ? ` (team library: ${p.libraryName})` : ""}
+          {p.librarySource ? ` (team ${p.librarySource})` : ""}
           {p.method ? `, method ${p.method}` : ""}
           {p.fittedAt ? `, fitted ${p.fittedAt.slice(0, 10)}` : ""}
           {/* The sentence's full stop comes after, so a note's own one is dropped (no "..") */}

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 
-import type { LibraryChoice } from "@/lib/client/sets/library-choice";
+import { choiceTitle, type LibraryChoice } from "@/lib/client/sets/library-choice";
 import { PRESETS } from "@/lib/client/loading-desk/presets";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
@@ -54,7 +54,7 @@ export function SetPicker({ library = [], disabled, onAdd }: SetPickerProps) {
             <optgroup key={title} label={title}>
               {items.map((c) => (
                 <option key={c.key} value={c.key}>
-                  {c.name}
+                  {choiceTitle(c)}
                 </option>
               ))}
             </optgroup>
@@ -71,7 +71,7 @@ export function SetPicker({ library = [], disabled, onAdd }: SetPickerProps) {
       </div>
       <p className="text-xs text-ink-soft" data-testid="set-pick-provenance">
         {chosenLibrary
-          ? `${chosenLibrary.name}: ${chosenLibrary.provenance}.`
+          ? `${choiceTitle(chosenLibrary)}: ${chosenLibrary.provenance}.`
           : library.length
             ? `${library.length} set${library.length === 1 ? "" : "s"} in the library below the presets.`
             : null}

@@ -2,11 +2,11 @@ import { count, eq } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { revisionComments } from "@/db/schema/comments";
-import { parameterSets } from "@/db/schema/parameter-sets";
+import { parameterSets, parameterSetVersions } from "@/db/schema/parameter-sets";
 import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 
 import type { NewComment } from "./comments";
-import type { NewParameterSet } from "./parameter-sets";
+import type { NewParameterSet, NewParameterSetVersion } from "./parameter-sets";
 import type { NewRevision } from "./revisions";
 import type { NewReviewEvent } from "./reviews";
 import type { NewScenario } from "./scenarios";
@@ -31,6 +31,8 @@ async function insertChunked<T>(rows: T[], insert: (chunk: T[]) => Promise<unkno
 
 export interface ImportedRows {
   parameterSets: NewParameterSet[];
+  /** Each imported set's versions (at least its version 1). */
+  parameterSetVersions: NewParameterSetVersion[];
   scenarios: NewScenario[];
   revisions: NewRevision[];
   reviewEvents: NewReviewEvent[];
@@ -41,6 +43,9 @@ export interface ImportedRows {
 /** Inserts in the order the foreign keys need: parents before the rows that point at them. */
 export async function insertImportedRows(db: Executor, rows: ImportedRows) {
   await insertChunked(rows.parameterSets, (chunk) => db.insert(parameterSets).values(chunk));
+  await insertChunked(rows.parameterSetVersions, (chunk) =>
+    db.insert(parameterSetVersions).values(chunk),
+  );
   await insertChunked(rows.scenarios, (chunk) => db.insert(scenarios).values(chunk));
   await insertChunked(rows.revisions, (chunk) => db.insert(scenarioRevisions).values(chunk));
   await insertChunked(rows.reviewEvents, (chunk) => db.insert(reviewEvents).values(chunk));

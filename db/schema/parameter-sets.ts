@@ -1,5 +1,14 @@
 import { sql } from "drizzle-orm";
-import { index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 
 import type { ParameterSetInput } from "@/lib/scenario/parameter-set-schema";
 
@@ -38,6 +47,8 @@ export const parameterSets = pgTable(
       .$type<ParameterSetProvenance>()
       .notNull()
       .default(sql`'{"kind":"typed"}'::jsonb`),
+    /** The number of the latest row in parameter_set_versions; values above are that version's. */
+    version: integer("version").notNull().default(1),
     createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
     updatedBy: uuid("updated_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
@@ -51,3 +62,24 @@ export const parameterSets = pgTable(
 );
 
 export type ParameterSetRow = typeof parameterSets.$inferSelect;
+
+// Every edit of a set's values keeps what the set was: version 1 is the set as created, each
+// values edit adds n+1. Revisions copy values into their file, so this is the library's memory of
+// which numbers a name stood for, and the report can name a superseded version.
+export const parameterSetVersions = pgTable(
+  "parameter_set_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    setId: uuid("set_id")
+      .notNull()
+      .references(() => parameterSets.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    values: jsonb("values").$type<ParameterSetInput>().notNull(),
+    provenance: jsonb("provenance").$type<ParameterSetProvenance>().notNull(),
+    createdBy: uuid("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("parameter_set_versions_set_version_idx").on(t.setId, t.version)],
+);
+
+export type ParameterSetVersionRow = typeof parameterSetVersions.$inferSelect;

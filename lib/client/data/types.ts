@@ -21,7 +21,11 @@ export type {
 } from "@/lib/server/workspace/share-links";
 export type { ShareLinkView } from "@/db/queries/share-links";
 export type { SharedRevisionResponse } from "@/lib/server/workspace/share-view";
-export type { ParameterSetListResponse } from "@/lib/server/workspace/parameter-sets";
+export type {
+  ParameterSetListResponse,
+  ParameterSetResponse,
+} from "@/lib/server/workspace/parameter-sets";
+export type { ParameterSetVersionSummary } from "@/lib/server/workspace/parameter-set-versions";
 export type { ParameterSetView } from "@/db/queries/parameter-sets";
 export type { AuditLogResponse } from "@/lib/server/workspace/audit-log";
 export type { PersonRef } from "@/db/queries/users-view";

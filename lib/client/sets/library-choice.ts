@@ -11,6 +11,8 @@ export interface LibrarySetLike {
   provenance: { kind: string; records?: string[]; method?: string };
   createdBy: { name: string } | null;
   createdAt: string;
+  /** the library version these values are (1 when the set was never edited) */
+  version?: number;
 }
 
 export interface LibraryChoice {
@@ -19,6 +21,8 @@ export interface LibraryChoice {
   /** Team name when the picker offers several teams' libraries (the sandbox). */
   team?: string;
   provenance: string;
+  /** the set's current version, shown beside its name: the values added are that version's */
+  version: number;
   params: Omit<ParameterSet, "id">;
 }
 
@@ -50,6 +54,12 @@ export function toLibraryChoice(set: LibrarySetLike, team?: string): LibraryChoi
     name: set.name,
     team,
     provenance: libraryProvenanceText(set),
+    version: set.version ?? 1,
     params: { ...values, label: set.name } as Omit<ParameterSet, "id">,
   };
+}
+
+/** "SMC fit December (version 2)": the name with the version the picker would add. */
+export function choiceTitle(choice: LibraryChoice): string {
+  return `${choice.name} (version ${choice.version})`;
 }

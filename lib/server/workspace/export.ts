@@ -1,6 +1,7 @@
 import "server-only";
 
 import type { Db } from "@/db/client";
+import { listTeamSetVersionRows } from "@/db/queries/parameter-sets";
 import { loadPeople, loadTeamContent } from "@/db/queries/team-export";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
@@ -32,6 +33,7 @@ export async function exportTeam(
 ): Promise<TeamExportResponse> {
   const ctx = await authorizeTeam(db, actor, teamSlug, "export");
   const c = await loadTeamContent(db, ctx.team.id);
+  const setVersions = await listTeamSetVersionRows(db, ctx.team.id);
   const people = await loadPeople(
     db,
     [
@@ -40,6 +42,7 @@ export async function exportTeam(
       ...c.eventRows.map((r) => r.actorId),
       ...c.commentRows.map((r) => r.authorId),
       ...c.setRows.flatMap((r) => [r.createdBy, r.updatedBy]),
+      ...setVersions.map((v) => v.createdBy),
     ].filter((id): id is string => id !== null),
   );
   const who = (id: string | null): ExportPerson => (id ? (people.get(id) ?? null) : null);
@@ -49,6 +52,7 @@ export async function exportTeam(
   const revisionsOf = groupBy(c.revisionRows, (r) => r.scenarioId);
   const eventsOf = groupBy(c.eventRows, (r) => r.revisionId);
   const commentsOf = groupBy(c.commentRows, (r) => r.revisionId);
+  const versionsOf = groupBy(setVersions, (v) => v.setId);
 
   const doc: TeamExport = {
     format: TEAM_EXPORT_FORMAT,
@@ -62,6 +66,13 @@ export async function exportTeam(
       updatedBy: who(s.updatedBy),
       createdAt: iso(s.createdAt),
       updatedAt: iso(s.updatedAt),
+      versions: (versionsOf.get(s.id) ?? []).map((v) => ({
+        version: v.version,
+        values: v.values as Record<string, unknown>,
+        provenance: v.provenance,
+        createdBy: who(v.createdBy),
+        createdAt: iso(v.createdAt),
+      })),
     })),
     scenarios: c.scenarioRows.map((s) => ({
       name: s.name,

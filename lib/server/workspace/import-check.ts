@@ -10,6 +10,18 @@ function invalid(where: string, message: string): never {
   throw new AppError("invalid:import", `${where}: ${message}`, where);
 }
 
+/** A set's versions: numbers unique, each version's values valid for the scenario module. */
+function checkSetVersions(set: TeamExport["parameterSets"][number], where: string) {
+  const numbers = new Set<number>();
+  (set.versions ?? []).forEach((v, j) => {
+    const at = `${where}.versions[${j}]`;
+    if (numbers.has(v.version)) invalid(at, `version ${v.version} twice`);
+    numbers.add(v.version);
+    const parsed = parameterSetSchema.safeParse(v.values);
+    if (!parsed.success) invalid(`${at}.values`, parsed.error.issues[0]?.message ?? "invalid");
+  });
+}
+
 /**
  * Checks what the zod shape cannot: every scenario file and parameter set passes the
  * scenario module's schema, revision numbers are unique per scenario, set names are unique,
@@ -23,6 +35,7 @@ export function checkTeamExport(doc: TeamExport): void {
     names.add(set.name);
     const parsed = parameterSetSchema.safeParse(set.values);
     if (!parsed.success) invalid(`${where}.values`, parsed.error.issues[0]?.message ?? "invalid");
+    checkSetVersions(set, where);
   });
   doc.scenarios.forEach((scenario, i) => {
     const numbers = new Set<number>();

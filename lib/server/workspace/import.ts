@@ -9,15 +9,14 @@ import type { NewReviewEvent } from "@/db/queries/reviews";
 import type { NewScenario } from "@/db/queries/scenarios";
 import { findTeamMembersByEmail } from "@/db/queries/team-export";
 import { countTeamContent, insertImportedRows } from "@/db/queries/workspace-import";
-import type { ParameterSetProvenance } from "@/db/schema/parameter-sets";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
-import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 
 import { type ExportPerson, type TeamExport, teamExportSchema } from "./export-schema";
 import { checkTeamExport } from "./import-check";
+import { importedSetRows } from "./import-sets";
 import { parseWithPath } from "./parse";
 
 export interface TeamImportResponse {
@@ -33,7 +32,9 @@ export interface TeamImportResponse {
  */
 function authorsIn(doc: TeamExport): string[] {
   const all: ExportPerson[] = [];
-  for (const s of doc.parameterSets) all.push(s.createdBy, s.updatedBy);
+  for (const s of doc.parameterSets) {
+    all.push(s.createdBy, s.updatedBy, ...(s.versions ?? []).map((v) => v.createdBy));
+  }
   for (const s of doc.scenarios) {
     all.push(s.createdBy, ...s.revisions.map((r) => r.author));
   }
@@ -70,17 +71,7 @@ export async function importTeam(
   const at = (iso: string) => new Date(iso);
   const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
 
-  const sets = doc.parameterSets.map((s) => ({
-    teamId: ctx.team.id,
-    name: s.name,
-    // Valid (checked above); parsing again gives the stored shape with defaults filled.
-    values: parameterSetSchema.parse(s.values),
-    provenance: s.provenance as ParameterSetProvenance,
-    createdBy: idOf(s.createdBy),
-    updatedBy: idOf(s.updatedBy),
-    createdAt: at(s.createdAt),
-    updatedAt: at(s.updatedAt),
-  }));
+  const { sets, versions } = importedSetRows(doc, ctx.team.id, idOf);
   const scenarioRows: NewScenario[] = [];
   const revisionRows: NewRevision[] = [];
   const eventRows: NewReviewEvent[] = [];
@@ -151,6 +142,7 @@ export async function importTeam(
     // Parents before replies: comment rows are in creation order, and a reply is never older.
     await insertImportedRows(tx, {
       parameterSets: sets,
+      parameterSetVersions: versions,
       scenarios: scenarioRows,
       revisions: revisionRows,
       reviewEvents: eventRows,

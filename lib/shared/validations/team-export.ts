@@ -46,6 +46,15 @@ const scenarioSchema = z.object({
   revisions: z.array(revisionSchema).min(1),
 });
 
+// One version of a library set (issue 13): what the set held from createdAt until the next one.
+const parameterSetVersionSchema = z.object({
+  version: z.number().int().min(1).max(INT4_MAX),
+  values: z.record(z.string(), z.unknown()),
+  provenance: provenanceSchema,
+  createdBy: person,
+  createdAt: iso,
+});
+
 const parameterSetSchema = z.object({
   name: z.string().trim().min(1).max(200),
   // Checked against the scenario module's schema by the import service.
@@ -55,6 +64,8 @@ const parameterSetSchema = z.object({
   updatedBy: person,
   createdAt: iso,
   updatedAt: iso,
+  /** Oldest first; files written before versions existed have none (the set is version 1). */
+  versions: z.array(parameterSetVersionSchema).max(10_000).optional(),
 });
 
 export const teamExportSchema = z.object({

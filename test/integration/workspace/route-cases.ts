@@ -232,6 +232,15 @@ export const ROUTE_CASES: Record<string, RouteCase> = {
     body: () => ({ name: "Renamed set" }),
     happened: async (db, w) => (await setRow(db, w)).name === "Renamed set",
   },
+  "PATCH parameter set values": {
+    handler: setRoute.PATCH,
+    method: "PATCH",
+    allowed: EDITORS,
+    params: (w) => ({ team: w.slug, set: w.setId }),
+    body: () => ({ values: { ...SET_VALUES, E1: 9100, E2: 9100, G12: 3500 } }),
+    // New numbers are version 2 of the set; a refused edit leaves it at version 1.
+    happened: async (db, w) => (await setRow(db, w)).version === 2,
+  },
   "DELETE parameter set": {
     handler: setRoute.DELETE,
     method: "DELETE",

@@ -12,6 +12,9 @@ afterEach(cleanup);
 const typed: SetProvenance = {
   setId: "B",
   libraryName: "Demo SMC (invented values)",
+  libraryVersion: 1,
+  latestVersion: 1,
+  librarySource: "library set 'Demo SMC (invented values)', version 1",
   kind: "typed",
   method: null,
   note: "The demo set of the law's specification. Invented demonstration values.",

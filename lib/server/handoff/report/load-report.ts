@@ -4,7 +4,7 @@ import "server-only";
 import type { Db } from "@/db/client";
 import { listConformanceChecksOfRevision } from "@/db/queries/conformance-checks";
 import { listFitsForTeam } from "@/db/queries/fits";
-import { listParameterSetsForTeam } from "@/db/queries/parameter-sets";
+import { listParameterSetsForTeam, listParameterSetVersionRows } from "@/db/queries/parameter-sets";
 import { findRevisionMeta, listReviewEvents } from "@/db/queries/revisions";
 import { listTestRecordsForTeam } from "@/db/queries/test-records";
 import type { Actor } from "@/lib/server/accounts/actor";
@@ -27,18 +27,23 @@ export async function loadCalibrationReport(
   const ctx = await authorizeTeam(db, actor, teamSlug, "team:read");
   const { scenario, revision } = await revisionInTeam(db, ctx.team.id, scenarioId, number);
   const file = parseScenarioFileOrThrow(revision.file);
-  const [meta, reviews, comments, checks, library, fits, records] = await Promise.all([
+  const [meta, reviews, comments, checks, library, versions, fits, records] = await Promise.all([
     findRevisionMeta(db, scenario.id, revision.number),
     listReviewEvents(db, revision.id),
     listComments(db, actor, teamSlug, scenario.id, revision.number),
     listConformanceChecksOfRevision(db, revision.id),
     listParameterSetsForTeam(db, ctx.team.id),
+    listParameterSetVersionRows(db, ctx.team.id),
     listFitsForTeam(db, ctx.team.id),
     listTestRecordsForTeam(db, ctx.team.id),
   ]);
   const provenance = matchProvenance(
     file.parameterSets,
-    library as unknown as LibrarySet[],
+    // Every version of every library set: a revision made before an edit names the old one.
+    library.map((l): LibrarySet => ({
+      ...l,
+      versions: versions.filter((v) => v.setId === l.id),
+    })) as unknown as LibrarySet[],
     fits.map((f) => ({ ...f, residuals: f.residuals ?? [], warnings: f.warnings ?? [] })),
     new Map(records.map((r) => [r.id, r.name])),
   );

@@ -8,11 +8,18 @@ import "server-only";
 import type { FitUncertainty } from "@/lib/calibration/uncertainty";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 
+type LibraryProvenance = { kind: string; method?: string; records?: string[]; note?: string };
+
 export interface LibrarySet {
   id: string;
   name: string;
+  /** the current version's values and provenance */
   values: Record<string, unknown>;
-  provenance: { kind: string; method?: string; records?: string[]; note?: string };
+  provenance: LibraryProvenance;
+  /** the current version's number (1 when the caller does not know of versions) */
+  version?: number;
+  /** every version of the set, the current one included; a revision may use a superseded one */
+  versions?: { version: number; values: Record<string, unknown>; provenance: LibraryProvenance }[];
 }
 
 export interface FitSummary {
@@ -30,6 +37,11 @@ export interface FitSummary {
 export interface SetProvenance {
   setId: string;
   libraryName: string | null;
+  /** the library version whose values the set has, and the set's latest version */
+  libraryVersion: number | null;
+  latestVersion: number | null;
+  /** e.g. "library set 'X', version 1 (superseded by version 2)"; null for a typed-in set */
+  librarySource: string | null;
   kind: string;
   method: string | null;
   note: string | null;
@@ -51,13 +63,72 @@ const NUMERIC = [
   "a1",
   "a2",
   "b",
+  "k6",
   "alpha",
   "beta",
   "dcrit",
 ];
 
+// Defaults of spec A.3 for keys a stored set may lack: a missing k6 is the default 1.
+const DEFAULTS: Record<string, unknown> = { k6: 1 };
+
 function sameValues(set: ParameterSet, values: Record<string, unknown>): boolean {
-  return NUMERIC.every((k) => (set as unknown as Record<string, unknown>)[k] === values[k]);
+  const own = set as unknown as Record<string, unknown>;
+  return NUMERIC.every((k) => (own[k] ?? DEFAULTS[k]) === (values[k] ?? DEFAULTS[k]));
+}
+
+interface Candidate {
+  lib: LibrarySet;
+  version: number;
+  latest: number;
+  values: Record<string, unknown>;
+  provenance: LibraryProvenance;
+}
+
+/** Each library set's versions, the current one first so an exact match prefers it. */
+function candidatesOf(library: LibrarySet[]): Candidate[] {
+  return library.flatMap((lib) => {
+    const latest = lib.version ?? 1;
+    const current: Candidate = {
+      lib,
+      version: latest,
+      latest,
+      values: lib.values,
+      provenance: lib.provenance,
+    };
+    const older = (lib.versions ?? [])
+      .filter((v) => v.version !== latest)
+      .sort((a, b) => b.version - a.version)
+      .map((v) => ({
+        lib,
+        version: v.version,
+        latest,
+        values: v.values,
+        provenance: v.provenance,
+      }));
+    return [current, ...older];
+  });
+}
+
+/** The library set's name and version as the report says it. */
+export function librarySourceText(name: string, version: number, latest: number): string {
+  const superseded = version < latest ? ` (superseded by version ${latest})` : "";
+  return `library set '${name}', version ${version}${superseded}`;
+}
+
+function findCandidate(set: ParameterSet, candidates: Candidate[]): Candidate | null {
+  const byValues = (c: Candidate) => sameValues(set, c.values);
+  // Current versions before superseded ones, and the set's own name before a namesake.
+  const current = candidates.filter((c) => c.version === c.latest);
+  const older = candidates.filter((c) => c.version !== c.latest);
+  const named = (c: Candidate) => set.label !== "" && c.lib.name === set.label && byValues(c);
+  return (
+    current.find(named) ??
+    older.find(named) ??
+    current.find(byValues) ??
+    older.find(byValues) ??
+    null
+  );
 }
 
 export function matchProvenance(
@@ -66,19 +137,22 @@ export function matchProvenance(
   fits: FitSummary[],
   recordNames: Map<string, string>,
 ): SetProvenance[] {
+  const candidates = candidatesOf(library);
   return sets.map((set) => {
-    const lib =
-      library.find((l) => set.label !== "" && l.name === set.label && sameValues(set, l.values)) ??
-      library.find((l) => sameValues(set, l.values)) ??
-      null;
+    const match = findCandidate(set, candidates);
+    const lib = match?.lib ?? null;
+    const origin = match?.provenance;
     const fit = lib ? fits.find((f) => f.parameterSetId === lib.id) : undefined;
-    const recordIds = fit?.recordIds ?? lib?.provenance.records ?? [];
+    const recordIds = fit?.recordIds ?? origin?.records ?? [];
     return {
       setId: set.id,
       libraryName: lib?.name ?? null,
-      kind: lib?.provenance.kind ?? "typed into the scenario",
-      method: fit?.method ?? lib?.provenance.method ?? null,
-      note: lib?.provenance.note ?? null,
+      libraryVersion: match?.version ?? null,
+      latestVersion: match?.latest ?? null,
+      librarySource: match ? librarySourceText(match.lib.name, match.version, match.latest) : null,
+      kind: origin?.kind ?? "typed into the scenario",
+      method: fit?.method ?? origin?.method ?? null,
+      note: origin?.note ?? null,
       records: recordIds.map((id) => {
         const residual = fit?.residuals.find((r) => r.id === id);
         return {

@@ -15,6 +15,7 @@ const fitted = toLibraryChoice({
   },
   createdBy: { name: "Ada Editor" },
   createdAt: "2026-12-03T10:00:00.000Z",
+  version: 2,
 });
 
 afterEach(cleanup);
@@ -28,8 +29,10 @@ describe("SetPicker", () => {
     expect(screen.getByRole("group", { name: "Team library" })).toBeTruthy();
     fireEvent.change(select, { target: { value: fitted.key } });
     expect(screen.getByTestId("set-pick-provenance").textContent).toBe(
-      "SMC fit December: fitted from cyclic 0° by Ada Editor, 2026-12-03.",
+      "SMC fit December (version 2): fitted from cyclic 0° by Ada Editor, 2026-12-03.",
     );
+    // issue 13 item 8: the list shows the version next to the name
+    expect(screen.getByRole("option", { name: "SMC fit December (version 2)" })).toBeTruthy();
     fireEvent.click(screen.getByRole("button", { name: "Add set" }));
     expect(onAdd).toHaveBeenCalledWith(
       expect.objectContaining({ label: "SMC fit December", E1: 12345 }),

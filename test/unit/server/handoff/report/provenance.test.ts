@@ -77,6 +77,51 @@ describe("report provenance", () => {
   it("says so when a set was typed into the scenario", () => {
     const [p] = matchProvenance([set("B", "", { E1: 12345 })], library, fits, names);
     expect(p).toMatchObject({ libraryName: null, kind: "typed into the scenario", records: [] });
+    expect(p.librarySource).toBeNull();
+  });
+
+  // Issue 13 item 8: a revision made before the library set was edited still names its origin.
+  const versioned: LibrarySet[] = [
+    {
+      id: "L3",
+      name: "PA6 edited",
+      values: { ...values, E1: 9500 },
+      provenance: { kind: "typed", note: "stiffness re-measured" },
+      version: 2,
+      versions: [
+        { version: 1, values: { ...values, E1: 8800 }, provenance: { kind: "fitted" } },
+        {
+          version: 2,
+          values: { ...values, E1: 9500 },
+          provenance: { kind: "typed", note: "stiffness re-measured" },
+        },
+      ],
+    },
+  ];
+
+  it("names a superseded version when the revision holds an older version's values", () => {
+    const [p] = matchProvenance([set("C", "PA6 edited", { E1: 8800 })], versioned, [], names);
+    expect(p).toMatchObject({
+      libraryName: "PA6 edited",
+      libraryVersion: 1,
+      latestVersion: 2,
+      librarySource: "library set 'PA6 edited', version 1 (superseded by version 2)",
+      kind: "fitted", // version 1's origin, not the current one's
+      note: null,
+    });
+  });
+
+  it("names the current version without a superseded note", () => {
+    const [p] = matchProvenance([set("D", "", { E1: 9500 })], versioned, [], names);
+    expect(p.librarySource).toBe("library set 'PA6 edited', version 2");
+  });
+
+  it("compares k6 too: a set differing only in k6 is not the library set", () => {
+    const [p] = matchProvenance([set("E", "Fitted SMC", { k6: 1.5 })], library, fits, names);
+    expect(p.libraryName).toBeNull();
+    // a stored set without k6 has the default k6 = 1 (spec damage-law.md A.3)
+    const [q] = matchProvenance([set("F", "Fitted SMC", { k6: 1 })], library, fits, names);
+    expect(q.libraryName).toBe("Fitted SMC");
   });
 });
 
