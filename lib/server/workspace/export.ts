@@ -1,11 +1,14 @@
 import "server-only";
 
 import type { Db } from "@/db/client";
-import { loadPeople, loadTeamContent } from "@/db/queries/team-export";
+import { loadPeople, loadTeamContent, loadTeamRecordsAndFits } from "@/db/queries/team-export";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { authorizeTeam } from "@/lib/server/access/team-access";
+import { BODY_LIMITS, formatBytes } from "@/lib/server/http/body-limits";
+import { AppError } from "@/lib/shared/errors";
 
+import { exportRecordsAndFits } from "./export-records";
 import { TEAM_EXPORT_FORMAT, type ExportPerson, type TeamExport } from "./export-schema";
 
 export type TeamExportResponse = TeamExport;
@@ -23,6 +26,19 @@ function groupBy<T, K>(rows: T[], key: (row: T) => K): Map<K, T[]> {
 const iso = (d: Date) => d.toISOString();
 const isoOrNull = (d: Date | null) => (d ? d.toISOString() : null);
 
+/**
+ * An export is only worth handing out if an import can take it back: past the import route's
+ * body limit (the original files of the test records weigh most) the person is told so here.
+ */
+function assertImportable(doc: TeamExport): void {
+  const size = Buffer.byteLength(JSON.stringify(doc), "utf8");
+  if (size <= BODY_LIMITS.teamImport) return;
+  throw new AppError(
+    "invalid:too-large",
+    `The team export would be ${formatBytes(size)}, and an import takes at most ${formatBytes(BODY_LIMITS.teamImport)}, so it could not be imported again. Delete test records that are no longer needed (their original files weigh most) and export again.`,
+  );
+}
+
 /** One JSON document with everything the team made (share links and the audit trail stay). */
 export async function exportTeam(
   db: Db,
@@ -32,6 +48,7 @@ export async function exportTeam(
 ): Promise<TeamExportResponse> {
   const ctx = await authorizeTeam(db, actor, teamSlug, "export");
   const c = await loadTeamContent(db, ctx.team.id);
+  const recordsAndFits = await loadTeamRecordsAndFits(db, ctx.team.id);
   const people = await loadPeople(
     db,
     [
@@ -40,6 +57,8 @@ export async function exportTeam(
       ...c.eventRows.map((r) => r.actorId),
       ...c.commentRows.map((r) => r.authorId),
       ...c.setRows.flatMap((r) => [r.createdBy, r.updatedBy]),
+      ...recordsAndFits.recordRows.map((r) => r.createdBy),
+      ...recordsAndFits.fitRows.map((r) => r.fit.createdBy),
     ].filter((id): id is string => id !== null),
   );
   const who = (id: string | null): ExportPerson => (id ? (people.get(id) ?? null) : null);
@@ -99,12 +118,19 @@ export async function exportTeam(
         })),
       })),
     })),
+    ...exportRecordsAndFits(recordsAndFits, who),
   };
+  assertImportable(doc);
   await recordAudit(db, {
     actorId: ctx.actor.id,
     teamId: ctx.team.id,
     action: "team.export",
-    detail: { scenarios: doc.scenarios.length, parameterSets: doc.parameterSets.length },
+    detail: {
+      scenarios: doc.scenarios.length,
+      parameterSets: doc.parameterSets.length,
+      testRecords: doc.testRecords.length,
+      fits: doc.fits.length,
+    },
   });
   return doc;
 }

@@ -8,16 +8,23 @@ import type { NewRevision } from "@/db/queries/revisions";
 import type { NewReviewEvent } from "@/db/queries/reviews";
 import type { NewScenario } from "@/db/queries/scenarios";
 import { findTeamMembersByEmail } from "@/db/queries/team-export";
-import { countTeamContent, insertImportedRows } from "@/db/queries/workspace-import";
+import {
+  countTeamContent,
+  findParameterSetIdsByName,
+  insertImportedRecordsAndFits,
+  insertImportedRows,
+} from "@/db/queries/workspace-import";
 import type { ParameterSetProvenance } from "@/db/schema/parameter-sets";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
+import { droppedOverlayNote, remapDeskOverlays } from "@/lib/scenario/desk-overlay-remap";
 import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 
 import { type ExportPerson, type TeamExport, teamExportSchema } from "./export-schema";
 import { checkTeamExport } from "./import-check";
+import { checkRecordsAndFits, planRecordsAndFits } from "./import-records";
 import { parseWithPath } from "./parse";
 
 export interface TeamImportResponse {
@@ -25,6 +32,10 @@ export interface TeamImportResponse {
   revisions: number;
   comments: number;
   parameterSets: number;
+  testRecords: number;
+  fits: number;
+  /** What the import left out, in words (overlays and fit links to records not in the file). */
+  notes: string[];
 }
 
 /**
@@ -37,6 +48,8 @@ function authorsIn(doc: TeamExport): string[] {
   for (const s of doc.scenarios) {
     all.push(s.createdBy, ...s.revisions.map((r) => r.author));
   }
+  for (const r of doc.testRecords) all.push(r.createdBy);
+  for (const f of doc.fits) all.push(f.createdBy);
   return all.filter((p): p is NonNullable<ExportPerson> => p !== null).map((p) => p.email);
 }
 
@@ -47,10 +60,10 @@ function nameOf(p: ExportPerson): string {
 
 async function assertEmpty(db: Executor, teamId: string) {
   const held = await countTeamContent(db, teamId);
-  if (held.scenarios > 0 || held.parameterSets > 0) {
+  if (held.scenarios > 0 || held.parameterSets > 0 || held.testRecords > 0) {
     throw new AppError(
       "conflict:not-empty",
-      "Import into a new, empty team: this one has scenarios or parameter sets already.",
+      "Import into a new, empty team: this one has scenarios, parameter sets or test records already.",
     );
   }
 }
@@ -65,10 +78,14 @@ export async function importTeam(
   const ctx = await authorizeTeam(db, actor, teamSlug, "team:import");
   const doc = parseWithPath(teamExportSchema, input);
   checkTeamExport(doc);
+  checkRecordsAndFits(doc);
   const known = await findTeamMembersByEmail(db, ctx.team.id, authorsIn(doc));
   const idOf = (p: ExportPerson) => (p ? (known.get(p.email.toLowerCase()) ?? null) : null);
   const at = (iso: string) => new Date(iso);
   const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
+
+  const planned = planRecordsAndFits(doc, ctx.team.id, idOf);
+  const notes = [...planned.notes];
 
   const sets = doc.parameterSets.map((s) => ({
     teamId: ctx.team.id,
@@ -103,13 +120,16 @@ export async function importTeam(
     });
     for (const r of s.revisions) {
       const revisionId = randomUUID();
+      // The overlays name records by their old ids: rewritten to the new ones, or left out.
+      const desk = remapDeskOverlays(r.file, planned.newIdOf);
+      for (const o of desk.dropped) notes.push(droppedOverlayNote(s.name, r.number, o));
       revisionRows.push({
         id: revisionId,
         scenarioId,
         number: r.number,
         authorId: idOf(r.author),
         message: r.message,
-        file: r.file,
+        file: desk.file,
         createdAt: at(r.createdAt),
         reviewState: r.review.state,
         // A sign-off in a file proves nothing here: kept as the file's text, never as a user.
@@ -156,6 +176,19 @@ export async function importTeam(
       reviewEvents: eventRows,
       comments: commentRows,
     });
+    const setIds = await findParameterSetIdsByName(
+      tx,
+      ctx.team.id,
+      planned.fits.flatMap((f) => f.parameterSetName ?? []),
+    );
+    await insertImportedRecordsAndFits(
+      tx,
+      planned.records,
+      planned.fits.map(({ parameterSetName, ...fit }) => ({
+        ...fit,
+        parameterSetId: parameterSetName === null ? null : (setIds.get(parameterSetName) ?? null),
+      })),
+    );
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -164,6 +197,8 @@ export async function importTeam(
         from: doc.team.slug,
         scenarios: scenarioRows.length,
         revisions: revisionRows.length,
+        testRecords: planned.records.length,
+        fits: planned.fits.length,
       },
     });
   });
@@ -172,5 +207,8 @@ export async function importTeam(
     revisions: revisionRows.length,
     comments: commentRows.length,
     parameterSets: sets.length,
+    testRecords: planned.records.length,
+    fits: planned.fits.length,
+    notes,
   };
 }
