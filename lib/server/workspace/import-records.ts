@@ -72,7 +72,6 @@ export interface PlannedRecordsAndFits {
   fits: (Omit<NewImportedFit, "parameterSetId"> & { parameterSetName: string | null })[];
   /** Old record id (lower case) → new id, for the fits and the scenario files' overlays. */
   newIdOf: Map<string, string>;
-  notes: string[];
 }
 
 /** New ids for every record, and fits rewritten to them. Call after checkRecordsAndFits. */
@@ -112,23 +111,12 @@ export function planRecordsAndFits(
     };
   });
   const setNames = new Set(doc.parameterSets.map((s) => s.name));
-  const notes: string[] = [];
   const renamed = (id: string) => newIdOf.get(id.toLowerCase()) ?? id;
-  const fits = doc.fits.map((f, i) => {
+  // What is left out here is said by teamImportNotes (lib/shared), the same words the page shows.
+  const fits = doc.fits.map((f) => {
     const recordIds = f.recordKeys.flatMap((k) => newIdOf.get(k.toLowerCase()) ?? []);
-    const missing = f.recordKeys.length - recordIds.length;
-    if (missing > 0) {
-      notes.push(
-        `Fit ${i + 1} used ${missing} test record${missing === 1 ? "" : "s"} that ${missing === 1 ? "is" : "are"} not in the file (deleted before the export); it keeps the others.`,
-      );
-    }
     const parameterSetName =
       f.parameterSet !== null && setNames.has(f.parameterSet) ? f.parameterSet : null;
-    if (f.parameterSet !== null && parameterSetName === null) {
-      notes.push(
-        `Fit ${i + 1} was saved as parameter set '${f.parameterSet}', which is not in the file; the fit is kept without it.`,
-      );
-    }
     const { id: _id, label: _label, ...params } = parameterSetSchema.parse(f.params);
     return {
       teamId,
@@ -148,5 +136,5 @@ export function planRecordsAndFits(
       createdAt: new Date(f.createdAt),
     };
   });
-  return { records, fits, newIdOf, notes };
+  return { records, fits, newIdOf };
 }

@@ -18,7 +18,8 @@ import type { ParameterSetProvenance } from "@/db/schema/parameter-sets";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
-import { droppedOverlayNote, remapDeskOverlays } from "@/lib/scenario/desk-overlay-remap";
+import { teamImportNotes } from "@/lib/shared/team-import-notes";
+import { remapDeskOverlays } from "@/lib/scenario/desk-overlay-remap";
 import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 
@@ -85,7 +86,7 @@ export async function importTeam(
   const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
 
   const planned = planRecordsAndFits(doc, ctx.team.id, idOf);
-  const notes = [...planned.notes];
+  const notes = teamImportNotes(doc);
 
   const sets = doc.parameterSets.map((s) => ({
     teamId: ctx.team.id,
@@ -122,7 +123,6 @@ export async function importTeam(
       const revisionId = randomUUID();
       // The overlays name records by their old ids: rewritten to the new ones, or left out.
       const desk = remapDeskOverlays(r.file, planned.newIdOf);
-      for (const o of desk.dropped) notes.push(droppedOverlayNote(s.name, r.number, o));
       revisionRows.push({
         id: revisionId,
         scenarioId,
