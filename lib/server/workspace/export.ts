@@ -5,7 +5,7 @@ import { loadPeople, loadTeamContent, loadTeamRecordsAndFits } from "@/db/querie
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { authorizeTeam } from "@/lib/server/access/team-access";
-import { BODY_LIMITS, formatBytes } from "@/lib/server/http/body-limits";
+import { exportTooLargeMessage } from "@/lib/server/http/body-limits";
 import { AppError } from "@/lib/shared/errors";
 
 import { exportRecordsAndFits } from "./export-records";
@@ -31,12 +31,8 @@ const isoOrNull = (d: Date | null) => (d ? d.toISOString() : null);
  * body limit (the original files of the test records weigh most) the person is told so here.
  */
 function assertImportable(doc: TeamExport): void {
-  const size = Buffer.byteLength(JSON.stringify(doc), "utf8");
-  if (size <= BODY_LIMITS.teamImport) return;
-  throw new AppError(
-    "invalid:too-large",
-    `The team export would be ${formatBytes(size)}, and an import takes at most ${formatBytes(BODY_LIMITS.teamImport)}, so it could not be imported again. Delete test records that are no longer needed (their original files weigh most) and export again.`,
-  );
+  const tooLarge = exportTooLargeMessage(Buffer.byteLength(JSON.stringify(doc), "utf8"));
+  if (tooLarge) throw new AppError("invalid:too-large", tooLarge);
 }
 
 /** One JSON document with everything the team made (share links and the audit trail stay). */
