@@ -18,7 +18,7 @@ import { TeamImportSummaryView } from "./team-import-summary-view";
 export interface TeamImportFormProps {
   teamSlug: string;
   /** What the team holds now: an import goes only into an empty team. */
-  held: { scenarios: number; parameterSets: number };
+  held: { scenarios: number; parameterSets: number; testRecords: number };
   /** The largest body the import route reads. */
   maxBytes: number;
 }
@@ -40,6 +40,8 @@ function createdWords(c: TeamImportResponse): string {
     plural(c.revisions, "revision"),
     plural(c.parameterSets, "parameter set"),
     plural(c.comments, "comment"),
+    plural(c.testRecords, "test record"),
+    plural(c.fits, "fit"),
   ].join(", ");
 }
 
@@ -49,7 +51,7 @@ export function TeamImportForm({ teamSlug, held, maxBytes }: TeamImportFormProps
   const [summary, setSummary] = useState<TeamImportSummary | null>(null);
   const [pending, setPending] = useState(false);
   const [outcome, setOutcome] = useState<Outcome | null>(null);
-  const empty = held.scenarios === 0 && held.parameterSets === 0;
+  const empty = held.scenarios === 0 && held.parameterSets === 0 && held.testRecords === 0;
 
   async function onFile(file: File | undefined) {
     setOutcome(null);
@@ -82,13 +84,15 @@ export function TeamImportForm({ teamSlug, held, maxBytes }: TeamImportFormProps
     <div className="space-y-3">
       <p className="text-sm text-ink-soft">
         Loads a file from &ldquo;Download the team export&rdquo; into this team: every scenario with
-        its revisions, the parameter sets, comments and reviews. Nothing is sent before you press
-        Import, and an import writes all of the file or nothing.
+        its revisions, the parameter sets, comments and reviews, the test records with their
+        original files, and the fits. Nothing is sent before you press Import, and an import writes
+        all of the file or nothing.
       </p>
       {!empty && !done ? (
         <FormMessage tone="error">
-          An import goes into an empty team, and this one holds {plural(held.scenarios, "scenario")}{" "}
-          and {plural(held.parameterSets, "parameter set")}. Create a new team on the{" "}
+          An import goes into an empty team, and this one holds {plural(held.scenarios, "scenario")}
+          , {plural(held.parameterSets, "parameter set")} and{" "}
+          {plural(held.testRecords, "test record")}. Create a new team on the{" "}
           <Link href="/teams" className="underline">
             teams page
           </Link>{" "}

@@ -6,6 +6,8 @@ const TOTAL_ROWS: [keyof Ready["counts"], string][] = [
   ["scenarios", "Scenarios"],
   ["revisions", "Revisions"],
   ["parameterSets", "Parameter sets"],
+  ["testRecords", "Test records (with their original files)"],
+  ["fits", "Fits"],
   ["comments", "Comments"],
   ["reviews", "Revisions with a review"],
   ["reviewEvents", "Review history entries"],
@@ -70,6 +72,19 @@ export function TeamImportSummaryView({ summary }: { summary: Ready }) {
       ) : null}
       {summary.parameterSets.length > 0 ? (
         <p className="text-sm">Parameter sets: {summary.parameterSets.join(", ")}.</p>
+      ) : null}
+      {summary.testRecords.length > 0 ? (
+        <p className="text-sm">Test records: {summary.testRecords.join(", ")}.</p>
+      ) : null}
+      {summary.notes.length > 0 ? (
+        <div className="text-sm" role="note" aria-label="Left out by the import">
+          <p>The import will leave out:</p>
+          <ul className="list-disc pl-5">
+            {summary.notes.map((note, i) => (
+              <li key={i}>{note}</li>
+            ))}
+          </ul>
+        </div>
       ) : null}
     </div>
   );

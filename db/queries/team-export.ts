@@ -2,9 +2,11 @@ import { and, asc, eq, inArray } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { revisionComments } from "@/db/schema/comments";
+import { fits } from "@/db/schema/fits";
 import { parameterSets } from "@/db/schema/parameter-sets";
 import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
 import { memberships } from "@/db/schema/teams";
+import { testRecords } from "@/db/schema/test-records";
 import { users } from "@/db/schema/users";
 
 /** Every row a team export needs, in stable order. */
@@ -45,6 +47,27 @@ export async function loadTeamContent(db: Executor, teamId: string) {
       .orderBy(asc(parameterSets.name)),
   ]);
   return { scenarioRows, revisionRows, eventRows, commentRows, setRows };
+}
+
+/**
+ * The team's test records (with points and the original file) and its fits, oldest first, each
+ * fit with the name of the parameter set it was saved as (the export names sets by name).
+ */
+export async function loadTeamRecordsAndFits(db: Executor, teamId: string) {
+  const [recordRows, fitRows] = await Promise.all([
+    db
+      .select()
+      .from(testRecords)
+      .where(eq(testRecords.teamId, teamId))
+      .orderBy(asc(testRecords.createdAt), asc(testRecords.id)),
+    db
+      .select({ fit: fits, parameterSetName: parameterSets.name })
+      .from(fits)
+      .leftJoin(parameterSets, eq(parameterSets.id, fits.parameterSetId))
+      .where(eq(fits.teamId, teamId))
+      .orderBy(asc(fits.createdAt), asc(fits.id)),
+  ]);
+  return { recordRows, fitRows };
 }
 
 /** E-mail and name of the given users, for turning author ids into portable people. */

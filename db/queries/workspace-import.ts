@@ -1,9 +1,11 @@
-import { count, eq } from "drizzle-orm";
+import { and, count, eq, inArray } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { revisionComments } from "@/db/schema/comments";
+import { fits } from "@/db/schema/fits";
 import { parameterSets, parameterSetVersions } from "@/db/schema/parameter-sets";
 import { reviewEvents, scenarioRevisions, scenarios } from "@/db/schema/scenarios";
+import { testRecords } from "@/db/schema/test-records";
 
 import type { NewComment } from "./comments";
 import type { NewParameterSet, NewParameterSetVersion } from "./parameter-sets";
@@ -13,13 +15,17 @@ import type { NewScenario } from "./scenarios";
 
 // The writes of a team import. The caller runs them in one transaction: all of it or nothing.
 
-/** How many scenarios and parameter sets the team holds (an import needs an empty team). */
+export type NewImportedRecord = typeof testRecords.$inferInsert;
+export type NewImportedFit = typeof fits.$inferInsert;
+
+/** How much the team holds (an import needs an empty team). */
 export async function countTeamContent(db: Executor, teamId: string) {
-  const [[s], [p]] = await Promise.all([
+  const [[s], [p], [r]] = await Promise.all([
     db.select({ n: count() }).from(scenarios).where(eq(scenarios.teamId, teamId)),
     db.select({ n: count() }).from(parameterSets).where(eq(parameterSets.teamId, teamId)),
+    db.select({ n: count() }).from(testRecords).where(eq(testRecords.teamId, teamId)),
   ]);
-  return { scenarios: s.n, parameterSets: p.n };
+  return { scenarios: s.n, parameterSets: p.n, testRecords: r.n };
 }
 
 // Rows per INSERT: keeps each statement well under PostgreSQL's limit of bind parameters.
@@ -50,4 +56,30 @@ export async function insertImportedRows(db: Executor, rows: ImportedRows) {
   await insertChunked(rows.revisions, (chunk) => db.insert(scenarioRevisions).values(chunk));
   await insertChunked(rows.reviewEvents, (chunk) => db.insert(reviewEvents).values(chunk));
   await insertChunked(rows.comments, (chunk) => db.insert(revisionComments).values(chunk));
+}
+
+/** Ids of the team's parameter sets under the given names (names are unique in a team). */
+export async function findParameterSetIdsByName(db: Executor, teamId: string, names: string[]) {
+  const unique = [...new Set(names)];
+  if (unique.length === 0) return new Map<string, string>();
+  const rows = await db
+    .select({ id: parameterSets.id, name: parameterSets.name })
+    .from(parameterSets)
+    .where(and(eq(parameterSets.teamId, teamId), inArray(parameterSets.name, unique)));
+  return new Map(rows.map((r) => [r.name, r.id]));
+}
+
+// A record's points and original file can be megabytes: a few rows per INSERT.
+const RECORD_CHUNK = 20;
+
+/** Test records first, then the fits that name them and the parameter sets already inserted. */
+export async function insertImportedRecordsAndFits(
+  db: Executor,
+  records: NewImportedRecord[],
+  fitRows: NewImportedFit[],
+) {
+  for (let i = 0; i < records.length; i += RECORD_CHUNK) {
+    await db.insert(testRecords).values(records.slice(i, i + RECORD_CHUNK));
+  }
+  await insertChunked(fitRows, (chunk) => db.insert(fits).values(chunk));
 }

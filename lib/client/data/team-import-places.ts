@@ -41,6 +41,15 @@ const FIELD_WORDS: Record<string, string> = {
   parentKey: "reply link",
   body: "text",
   increment: "increment",
+  testRecords: "test records",
+  fits: "fits",
+  recordKeys: "records",
+  specimenId: "specimen id",
+  points: "points",
+  mapping: "column mapping",
+  sha256: "sha-256 checksum",
+  params: "values",
+  couponOrientation: "coupon orientation",
 };
 
 function wordOf(key: PropertyKey): string {
@@ -109,6 +118,13 @@ export function describePlace(path: readonly PropertyKey[], doc: PlaceDoc): Plac
       return { where: `review history entry ${k + 1} of ${revisionWords}`, field: fieldOf(leaf) };
     }
     return { where: revisionWords, field: fieldOf(inner) };
+  }
+  if (top === "testRecords" && typeof i === "number") {
+    const record = itemAt(doc?.testRecords, i);
+    return { where: named(record, "test record", i), field: fieldOf(rest) };
+  }
+  if (top === "fits" && typeof i === "number") {
+    return { where: `fit ${i + 1} in the file`, field: fieldOf(rest) };
   }
   if (top === "team") return { where: "the file", field: fieldOf(["team", ...path.slice(1)]) };
   return { where: "the file", field: fieldOf(path) };

@@ -2,6 +2,7 @@ import type { z } from "zod";
 
 import { parameterSetSchema } from "@/lib/scenario/parameter-set-schema";
 import { parseScenarioFile } from "@/lib/scenario/scenario-schema";
+import { teamImportNotes } from "@/lib/shared/team-import-notes";
 import { type TeamExport, teamExportSchema } from "@/lib/shared/validations/team-export";
 
 import { describePlace, type PlaceDoc } from "./team-import-places";
@@ -27,6 +28,9 @@ export interface TeamImportCounts {
   reviews: number;
   /** Entries of review history (who moved a revision from which state to which). */
   reviewEvents: number;
+  /** Test records, each with its original file. */
+  testRecords: number;
+  fits: number;
 }
 
 export type TeamImportSummary =
@@ -37,6 +41,9 @@ export type TeamImportSummary =
       counts: TeamImportCounts;
       scenarios: ScenarioLine[];
       parameterSets: string[];
+      testRecords: string[];
+      /** What the import will leave out (overlays of records not in the file, …). */
+      notes: string[];
     }
   | { ok: false; problems: string[] };
 
@@ -161,6 +168,20 @@ function contentProblems(doc: TeamExport): string[] {
       });
     }
   }
+  const keys = new Set<string>();
+  for (const record of doc.testRecords) {
+    const key = record.key.toLowerCase();
+    if (keys.has(key)) problems.push(`Test record '${record.name}' appears twice in the file.`);
+    keys.add(key);
+  }
+  doc.fits.forEach((fit, i) => {
+    const values = parameterSetSchema.safeParse(fit.params);
+    if (!values.success) {
+      const first = values.error.issues[0];
+      const field = first?.path.length ? `${first.path.join(".")}: ` : "";
+      problems.push(`Fit ${i + 1} has values that are not valid (${field}${first?.message}).`);
+    }
+  });
   return problems;
 }
 
@@ -203,9 +224,13 @@ export function summarizeTeamExport(input: unknown): TeamImportSummary {
         (n, s) => n + s.revisions.reduce((m, r) => m + r.reviewEvents.length, 0),
         0,
       ),
+      testRecords: doc.testRecords.length,
+      fits: doc.fits.length,
     },
     scenarios,
     parameterSets: doc.parameterSets.map((p) => p.name),
+    testRecords: doc.testRecords.map((r) => r.name),
+    notes: teamImportNotes(doc),
   };
 }
 

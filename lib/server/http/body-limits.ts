@@ -28,3 +28,15 @@ export function formatBytes(bytes: number): string {
   if (bytes >= 1024) return `${Math.round((bytes / 1024) * 10) / 10} KB`;
   return `${bytes} bytes`;
 }
+
+/**
+ * Why a team export of `size` bytes could not be imported again, or null when it could: the
+ * import route reads at most BODY_LIMITS.teamImport, and test records' original files weigh most.
+ */
+export function exportTooLargeMessage(
+  size: number,
+  limit: number = BODY_LIMITS.teamImport,
+): string | null {
+  if (size <= limit) return null;
+  return `The team export would be ${formatBytes(size)}, and an import takes at most ${formatBytes(limit)}, so it could not be imported again. Delete test records that are no longer needed (their original files weigh most) and export again.`;
+}

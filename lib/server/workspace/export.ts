@@ -2,11 +2,14 @@ import "server-only";
 
 import type { Db } from "@/db/client";
 import { listTeamSetVersionRows } from "@/db/queries/parameter-sets";
-import { loadPeople, loadTeamContent } from "@/db/queries/team-export";
+import { loadPeople, loadTeamContent, loadTeamRecordsAndFits } from "@/db/queries/team-export";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { authorizeTeam } from "@/lib/server/access/team-access";
+import { exportTooLargeMessage } from "@/lib/server/http/body-limits";
+import { AppError } from "@/lib/shared/errors";
 
+import { exportRecordsAndFits } from "./export-records";
 import { TEAM_EXPORT_FORMAT, type ExportPerson, type TeamExport } from "./export-schema";
 
 export type TeamExportResponse = TeamExport;
@@ -24,6 +27,15 @@ function groupBy<T, K>(rows: T[], key: (row: T) => K): Map<K, T[]> {
 const iso = (d: Date) => d.toISOString();
 const isoOrNull = (d: Date | null) => (d ? d.toISOString() : null);
 
+/**
+ * An export is only worth handing out if an import can take it back: past the import route's
+ * body limit (the original files of the test records weigh most) the person is told so here.
+ */
+function assertImportable(doc: TeamExport): void {
+  const tooLarge = exportTooLargeMessage(Buffer.byteLength(JSON.stringify(doc), "utf8"));
+  if (tooLarge) throw new AppError("invalid:too-large", tooLarge);
+}
+
 /** One JSON document with everything the team made (share links and the audit trail stay). */
 export async function exportTeam(
   db: Db,
@@ -34,6 +46,7 @@ export async function exportTeam(
   const ctx = await authorizeTeam(db, actor, teamSlug, "export");
   const c = await loadTeamContent(db, ctx.team.id);
   const setVersions = await listTeamSetVersionRows(db, ctx.team.id);
+  const recordsAndFits = await loadTeamRecordsAndFits(db, ctx.team.id);
   const people = await loadPeople(
     db,
     [
@@ -43,6 +56,8 @@ export async function exportTeam(
       ...c.commentRows.map((r) => r.authorId),
       ...c.setRows.flatMap((r) => [r.createdBy, r.updatedBy]),
       ...setVersions.map((v) => v.createdBy),
+      ...recordsAndFits.recordRows.map((r) => r.createdBy),
+      ...recordsAndFits.fitRows.map((r) => r.fit.createdBy),
     ].filter((id): id is string => id !== null),
   );
   const who = (id: string | null): ExportPerson => (id ? (people.get(id) ?? null) : null);
@@ -110,12 +125,19 @@ export async function exportTeam(
         })),
       })),
     })),
+    ...exportRecordsAndFits(recordsAndFits, who),
   };
+  assertImportable(doc);
   await recordAudit(db, {
     actorId: ctx.actor.id,
     teamId: ctx.team.id,
     action: "team.export",
-    detail: { scenarios: doc.scenarios.length, parameterSets: doc.parameterSets.length },
+    detail: {
+      scenarios: doc.scenarios.length,
+      parameterSets: doc.parameterSets.length,
+      testRecords: doc.testRecords.length,
+      fits: doc.fits.length,
+    },
   });
   return doc;
 }

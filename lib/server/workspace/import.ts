@@ -8,15 +8,23 @@ import type { NewRevision } from "@/db/queries/revisions";
 import type { NewReviewEvent } from "@/db/queries/reviews";
 import type { NewScenario } from "@/db/queries/scenarios";
 import { findTeamMembersByEmail } from "@/db/queries/team-export";
-import { countTeamContent, insertImportedRows } from "@/db/queries/workspace-import";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
+import {
+  countTeamContent,
+  findParameterSetIdsByName,
+  insertImportedRecordsAndFits,
+  insertImportedRows,
+} from "@/db/queries/workspace-import";
+import { teamImportNotes } from "@/lib/shared/team-import-notes";
+import { remapDeskOverlays } from "@/lib/scenario/desk-overlay-remap";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 
 import { type ExportPerson, type TeamExport, teamExportSchema } from "./export-schema";
 import { checkTeamExport } from "./import-check";
 import { importedSetRows } from "./import-sets";
+import { checkRecordsAndFits, planRecordsAndFits } from "./import-records";
 import { parseWithPath } from "./parse";
 
 export interface TeamImportResponse {
@@ -24,6 +32,10 @@ export interface TeamImportResponse {
   revisions: number;
   comments: number;
   parameterSets: number;
+  testRecords: number;
+  fits: number;
+  /** What the import left out, in words (overlays and fit links to records not in the file). */
+  notes: string[];
 }
 
 /**
@@ -38,6 +50,8 @@ function authorsIn(doc: TeamExport): string[] {
   for (const s of doc.scenarios) {
     all.push(s.createdBy, ...s.revisions.map((r) => r.author));
   }
+  for (const r of doc.testRecords) all.push(r.createdBy);
+  for (const f of doc.fits) all.push(f.createdBy);
   return all.filter((p): p is NonNullable<ExportPerson> => p !== null).map((p) => p.email);
 }
 
@@ -48,10 +62,10 @@ function nameOf(p: ExportPerson): string {
 
 async function assertEmpty(db: Executor, teamId: string) {
   const held = await countTeamContent(db, teamId);
-  if (held.scenarios > 0 || held.parameterSets > 0) {
+  if (held.scenarios > 0 || held.parameterSets > 0 || held.testRecords > 0) {
     throw new AppError(
       "conflict:not-empty",
-      "Import into a new, empty team: this one has scenarios or parameter sets already.",
+      "Import into a new, empty team: this one has scenarios, parameter sets or test records already.",
     );
   }
 }
@@ -66,12 +80,15 @@ export async function importTeam(
   const ctx = await authorizeTeam(db, actor, teamSlug, "team:import");
   const doc = parseWithPath(teamExportSchema, input);
   checkTeamExport(doc);
+  checkRecordsAndFits(doc);
   const known = await findTeamMembersByEmail(db, ctx.team.id, authorsIn(doc));
   const idOf = (p: ExportPerson) => (p ? (known.get(p.email.toLowerCase()) ?? null) : null);
   const at = (iso: string) => new Date(iso);
   const at0 = (iso: string | null) => (iso ? new Date(iso) : null);
 
   const { sets, versions } = importedSetRows(doc, ctx.team.id, idOf);
+  const planned = planRecordsAndFits(doc, ctx.team.id, idOf);
+  const notes = teamImportNotes(doc);
   const scenarioRows: NewScenario[] = [];
   const revisionRows: NewRevision[] = [];
   const eventRows: NewReviewEvent[] = [];
@@ -94,13 +111,15 @@ export async function importTeam(
     });
     for (const r of s.revisions) {
       const revisionId = randomUUID();
+      // The overlays name records by their old ids: rewritten to the new ones, or left out.
+      const desk = remapDeskOverlays(r.file, planned.newIdOf);
       revisionRows.push({
         id: revisionId,
         scenarioId,
         number: r.number,
         authorId: idOf(r.author),
         message: r.message,
-        file: r.file,
+        file: desk.file,
         createdAt: at(r.createdAt),
         reviewState: r.review.state,
         // A sign-off in a file proves nothing here: kept as the file's text, never as a user.
@@ -148,6 +167,19 @@ export async function importTeam(
       reviewEvents: eventRows,
       comments: commentRows,
     });
+    const setIds = await findParameterSetIdsByName(
+      tx,
+      ctx.team.id,
+      planned.fits.flatMap((f) => f.parameterSetName ?? []),
+    );
+    await insertImportedRecordsAndFits(
+      tx,
+      planned.records,
+      planned.fits.map(({ parameterSetName, ...fit }) => ({
+        ...fit,
+        parameterSetId: parameterSetName === null ? null : (setIds.get(parameterSetName) ?? null),
+      })),
+    );
     await recordAudit(tx, {
       actorId: ctx.actor.id,
       teamId: ctx.team.id,
@@ -156,6 +188,8 @@ export async function importTeam(
         from: doc.team.slug,
         scenarios: scenarioRows.length,
         revisions: revisionRows.length,
+        testRecords: planned.records.length,
+        fits: planned.fits.length,
       },
     });
   });
@@ -164,5 +198,8 @@ export async function importTeam(
     revisions: revisionRows.length,
     comments: commentRows.length,
     parameterSets: sets.length,
+    testRecords: planned.records.length,
+    fits: planned.fits.length,
+    notes,
   };
 }

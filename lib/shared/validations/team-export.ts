@@ -4,6 +4,8 @@ import { REVIEW_STATES } from "@/lib/shared/validations/workspace";
 import { provenanceSchema } from "@/lib/shared/validations/parameter-sets";
 import { INT4_MAX } from "@/lib/shared/validations/int4";
 
+import { exportFitSchema, exportTestRecordSchema } from "./team-export-records";
+
 // The team export file. People travel as e-mail + name (ids mean nothing elsewhere); keys are
 // the exporting installation's ids, used only to tie replies to their parent inside the file.
 
@@ -77,9 +79,13 @@ export const teamExportSchema = z.object({
   team: z.object({ name: z.string(), slug: z.string() }),
   parameterSets: z.array(parameterSetSchema),
   scenarios: z.array(scenarioSchema),
+  // Absent from files written before records and fits travelled: those import as before.
+  testRecords: z.array(exportTestRecordSchema).default([]),
+  fits: z.array(exportFitSchema).default([]),
 });
 
 export type TeamExport = z.infer<typeof teamExportSchema>;
 export type ExportPerson = z.infer<typeof person>;
 export type ExportScenario = TeamExport["scenarios"][number];
 export type ExportRevision = ExportScenario["revisions"][number];
+export type { ExportFit, ExportTestRecord } from "./team-export-records";

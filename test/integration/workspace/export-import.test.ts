@@ -215,7 +215,15 @@ describe("team export and import", () => {
     const target = await createTeam(db, w.members.owner, { name: unique("Elsewhere") });
     const report = await importTeam(db, w.members.owner, target.slug, doc);
     expect(Object.keys(report).sort()).toEqual(
-      ["comments", "parameterSets", "revisions", "scenarios"].sort(),
+      [
+        "comments",
+        "fits",
+        "notes",
+        "parameterSets",
+        "revisions",
+        "scenarios",
+        "testRecords",
+      ].sort(),
     );
     const again = await exportTeam(db, w.members.owner, target.slug);
     expect(again.scenarios[0].revisions[0].author).toBeNull();

@@ -3,7 +3,7 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 
 import { TeamImportForm } from "@/components/teams/team-import-form";
 
-import { exportFile } from "../../fixtures/team-export";
+import { exportFile, exportFileWithRecords } from "../../fixtures/team-export";
 
 // Issue 13 item 8: choose a team export, see what it will create, press Import, see the result.
 afterEach(() => {
@@ -11,7 +11,7 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const EMPTY = { scenarios: 0, parameterSets: 0 };
+const EMPTY = { scenarios: 0, parameterSets: 0, testRecords: 0 };
 const MB = 1024 * 1024;
 
 function choose(content: unknown, name = "demo.team-export.json") {
@@ -38,7 +38,15 @@ function answer(status: number, body: unknown) {
 
 describe("TeamImportForm", () => {
   it("shows what the file will create, then posts it and says what was created", async () => {
-    const fetchMock = answer(201, { scenarios: 2, revisions: 3, comments: 3, parameterSets: 1 });
+    const fetchMock = answer(201, {
+      scenarios: 2,
+      revisions: 3,
+      comments: 3,
+      parameterSets: 1,
+      testRecords: 0,
+      fits: 0,
+      notes: [],
+    });
     render(<TeamImportForm teamSlug="new-team" held={EMPTY} maxBytes={64 * MB} />);
     expect(screen.queryByRole("button", { name: "Import" })).toBeNull();
     choose(exportFile());
@@ -48,6 +56,8 @@ describe("TeamImportForm", () => {
       ["Scenarios", "2"],
       ["Revisions", "3"],
       ["Parameter sets", "1"],
+      ["Test records (with their original files)", "0"],
+      ["Fits", "0"],
       ["Comments", "3"],
       ["Revisions with a review", "1"],
       ["Review history entries", "2"],
@@ -62,7 +72,7 @@ describe("TeamImportForm", () => {
     fireEvent.click(screen.getByRole("button", { name: "Import" }));
     const done = await screen.findByText(/^Imported /);
     expect(done.textContent).toContain(
-      "Imported 2 scenarios, 3 revisions, 1 parameter set, 3 comments.",
+      "Imported 2 scenarios, 3 revisions, 1 parameter set, 3 comments, 0 test records, 0 fits.",
     );
     expect(screen.getByRole("link", { name: "Open the scenarios" }).getAttribute("href")).toBe(
       "/teams/new-team/scenarios",
@@ -113,13 +123,30 @@ describe("TeamImportForm", () => {
     );
   });
 
+  it("counts the file's test records and fits and says which overlay it leaves out", async () => {
+    render(<TeamImportForm teamSlug="t" held={EMPTY} maxBytes={64 * MB} />);
+    choose(exportFileWithRecords());
+    const totals = await screen.findByRole("table", { name: "What the import will create" });
+    expect(cellsOf(totals)).toContainEqual(["Test records (with their original files)", "1"]);
+    expect(cellsOf(totals)).toContainEqual(["Fits", "1"]);
+    expect(screen.getByText("Test records: T-01.")).toBeTruthy();
+    const note = screen.getByRole("note", { name: "Left out by the import" });
+    expect(note.textContent).toContain(
+      "Revision 2 of 'Plate rib' drew 'T-77 elsewhere' over its charts; that record is not in the file, so the overlay is left out.",
+    );
+  });
+
   it("tells a team that holds work that it must be empty, before any upload", async () => {
     const fetchMock = answer(201, {});
     render(
-      <TeamImportForm teamSlug="t" held={{ scenarios: 3, parameterSets: 1 }} maxBytes={64 * MB} />,
+      <TeamImportForm
+        teamSlug="t"
+        held={{ scenarios: 3, parameterSets: 1, testRecords: 2 }}
+        maxBytes={64 * MB}
+      />,
     );
     expect(screen.getByRole("alert").textContent).toContain(
-      "An import goes into an empty team, and this one holds 3 scenarios and 1 parameter set.",
+      "An import goes into an empty team, and this one holds 3 scenarios, 1 parameter set and 2 test records.",
     );
     choose(exportFile());
     await screen.findByTestId("import-summary");

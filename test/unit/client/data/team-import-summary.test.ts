@@ -7,12 +7,48 @@ import {
 } from "@/lib/client/data/team-import-summary";
 import { TEAM_EXPORT_FORMAT } from "@/lib/shared/validations/team-export";
 
-import { comment, DEMO_FILE, exportFile, revision, T } from "../../../fixtures/team-export";
+import {
+  comment,
+  DEMO_FILE,
+  exportFile,
+  exportFileWithRecords,
+  revision,
+  T,
+} from "../../../fixtures/team-export";
 
 // Issue 13 item 8: the import page says what a team export will create, and what is wrong with
 // it in words (not a schema path), before anything is sent.
 
 describe("summarizeTeamExport", () => {
+  it("counts test records and fits, and says which overlay will be left out", () => {
+    const summary = summarizeTeamExport(exportFileWithRecords());
+    if (!summary.ok) throw new Error(summary.problems.join("\n"));
+    expect(summary.counts).toMatchObject({ testRecords: 1, fits: 1, scenarios: 2 });
+    expect(summary.testRecords).toEqual(["T-01"]);
+    expect(summary.notes).toEqual([
+      "Revision 2 of 'Plate rib' drew 'T-77 elsewhere' over its charts; that record is not in the file, so the overlay is left out.",
+    ]);
+    // A file of the old shape has none of them, and nothing is left out.
+    const old = summarizeTeamExport(exportFile());
+    expect(old.ok && [old.testRecords, old.notes]).toEqual([[], []]);
+  });
+
+  it("names a test record whose field is wrong, and a fit whose values are not valid", () => {
+    const file = exportFileWithRecords();
+    (file.testRecords[0] as { specimenId: unknown }).specimenId = 7;
+    (file.fits[0].params as { E1: number }).E1 = -1;
+    const summary = summarizeTeamExport(file);
+    expect(summary).toEqual({
+      ok: false,
+      problems: ["Test record 'T-01': the specimen id should be text."],
+    });
+    const values = exportFileWithRecords();
+    (values.fits[0].params as { E1: number }).E1 = -1;
+    const second = summarizeTeamExport(values);
+    expect(second.ok).toBe(false);
+    expect(!second.ok && second.problems[0]).toMatch(/^Fit 1 has values that are not valid \(E1: /);
+  });
+
   it("counts what will be created, per scenario and in total", () => {
     const summary = summarizeTeamExport(exportFile());
     if (!summary.ok) throw new Error(summary.problems.join("\n"));
@@ -24,6 +60,8 @@ describe("summarizeTeamExport", () => {
       comments: 3,
       reviews: 1,
       reviewEvents: 2,
+      testRecords: 0,
+      fits: 0,
     });
     expect(summary.scenarios).toEqual([
       { name: "Plate rib", revisions: 2, comments: 2, reviews: 1 },
