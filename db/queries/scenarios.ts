@@ -154,19 +154,6 @@ export async function updateScenarioRow(
   await db.update(scenarios).set(changes).where(eq(scenarios.id, scenarioId));
 }
 
-/** A new revision became the latest: its review starts as a draft again. */
-export async function setLatestRevision(
-  db: Executor,
-  scenarioId: string,
-  number: number,
-  at: Date,
-) {
-  await db
-    .update(scenarios)
-    .set({ latestRevision: number, latestReviewState: "draft", updatedAt: at })
-    .where(eq(scenarios.id, scenarioId));
-}
-
 /** Revisions, comments, review history and share links go with it (foreign keys cascade). */
 export async function deleteScenarioRow(db: Executor, scenarioId: string) {
   await db.delete(scenarios).where(eq(scenarios.id, scenarioId));
