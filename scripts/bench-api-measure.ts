@@ -14,7 +14,12 @@ export interface Phase {
   statuses: Record<number, number>;
   /** CPU the app's processes spent per request (Linux /proc), independent of other load. */
   serverCpuMs: number;
+  /** Start and end on the system's monotonic clock in µs, the clock V8's CPU profiles use. */
+  startedUs: number;
+  endedUs: number;
 }
+
+const monotonicUs = () => Number(process.hrtime.bigint() / 1000n);
 
 /**
  * user + system CPU time in ms (clock ticks of 10 ms, from /proc) of every live process in the
@@ -52,6 +57,7 @@ export async function measure(
   serverGroup: number | undefined,
 ): Promise<Phase> {
   const cpuBefore = cpuMsOfGroup(serverGroup);
+  const startedUs = monotonicUs();
   const times: number[] = [];
   const statuses: Record<number, number> = {};
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
@@ -61,6 +67,7 @@ export async function measure(
       statuses[status] = (statuses[status] ?? 0) + 1;
     });
   });
+  const endedUs = monotonicUs();
   times.sort((a, b) => a - b);
   const bad = Object.entries(statuses).reduce((n, [s, c]) => n + (Number(s) >= 400 ? c : 0), 0);
   return {
@@ -73,5 +80,7 @@ export async function measure(
     errors: bad + result.errors + result.timeouts,
     statuses,
     serverCpuMs: ms((cpuMsOfGroup(serverGroup) - cpuBefore) / Math.max(1, times.length)),
+    startedUs,
+    endedUs,
   };
 }

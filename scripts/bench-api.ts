@@ -6,7 +6,7 @@
  * saving a revision. The ratios compare each route's p95 with the floor's of the same run.
  */
 import type { ChildProcess } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 
@@ -143,6 +143,17 @@ async function main() {
       console.log(
         `${p.name.padEnd(5)} requests=${p.requests} rps=${p.rps} p50=${p.p50}ms p95=${p.p95}ms p99=${p.p99}ms errors=${p.errors} statuses=${JSON.stringify(p.statuses)} app_cpu_per_request=${p.serverCpuMs}ms`,
       );
+    }
+    const profileDir = process.env.BENCH_CPU_PROF_DIR;
+    if (profileDir) {
+      // Phase windows for scripts/cpu-profile-top.ts, which keeps only one phase's samples.
+      const windows = [floor, list, save].map(({ name, requests, startedUs, endedUs }) => ({
+        name,
+        requests,
+        startedUs,
+        endedUs,
+      }));
+      writeFileSync(path.join(profileDir, "phases.json"), JSON.stringify(windows, null, 2));
     }
     const load = os
       .loadavg()

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, sql, type SQL } from "drizzle-orm";
 
 import type { Executor } from "@/db/client";
 import { conformanceChecks, type ConformanceCheckRow } from "@/db/schema/conformance-checks";
@@ -84,6 +84,24 @@ export async function findLatestConformanceVerdict(
 export interface LatestRevisionVerdict {
   passed: boolean;
   checkedAt: string;
+}
+
+/**
+ * The same verdict as a column of a query over `scenarios` (correlated on the outer row), so a
+ * page of the list needs no query of its own for it. `checkedAt` comes out as ISO text in UTC
+ * with milliseconds, as Date#toISOString writes it.
+ */
+export function latestVerdictOfLatestRevision(teamId: string): SQL<LatestRevisionVerdict | null> {
+  return sql<LatestRevisionVerdict | null>`(
+    select json_build_object(
+      'passed', c.passed,
+      'checkedAt', to_char(c.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"'))
+    from ${conformanceChecks} c
+    join ${scenarioRevisions} r on r.id = c.revision_id
+    where r.scenario_id = ${scenarios.id} and r.number = ${scenarios.latestRevision}
+      and c.team_id = ${teamId}
+    order by c.created_at desc, c.id desc
+    limit 1)`;
 }
 
 /**

@@ -52,6 +52,26 @@ function toRevisionMeta(row: MetaRow) {
 }
 export type RevisionMeta = ReturnType<typeof toRevisionMeta>;
 
+/** The meta of a revision just saved, from what was written: a new revision is a draft. */
+export function newRevisionMeta(
+  saved: { id: string; number: number },
+  author: PersonRef,
+  message: string,
+  at: Date,
+): RevisionMeta {
+  return toRevisionMeta({
+    id: saved.id,
+    number: saved.number,
+    author: { id: author.id, name: author.name },
+    message,
+    createdAt: at,
+    reviewState: "draft",
+    reviewBy: null,
+    reviewAt: null,
+    importedReviewBy: null,
+  });
+}
+
 export async function listRevisionsOfScenario(db: Executor, scenarioId: string) {
   const rows = await metaQuery(db)
     .where(eq(scenarioRevisions.scenarioId, scenarioId))

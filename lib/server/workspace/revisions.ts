@@ -3,19 +3,18 @@ import "server-only";
 import type { Db } from "@/db/client";
 import {
   findRevisionMeta,
-  insertRevision,
   listRevisionsOfScenario,
+  newRevisionMeta,
   type RevisionMeta,
 } from "@/db/queries/revisions";
-import { setLatestRevision } from "@/db/queries/scenarios";
+import { insertRevisionOnTop } from "@/db/queries/save-revision";
 import type { Actor } from "@/lib/server/accounts/actor";
 import { isUniqueViolation } from "@/lib/server/accounts/pg-errors";
-import { recordAudit } from "@/lib/server/access/audit";
 import { AppError } from "@/lib/shared/errors";
 import { authorizeTeam } from "@/lib/server/access/team-access";
 import { saveRevisionSchema } from "@/lib/shared/validations/workspace";
 
-import { DetailedAppError, notFound } from "./errors";
+import { DetailedAppError, notFound, requireUuid } from "./errors";
 import { parseScenarioFileOrThrow, parseWithPath } from "./parse";
 import { revisionInTeam, scenarioInTeam } from "../access/scope";
 
@@ -67,9 +66,11 @@ async function conflictWith(db: Db, scenarioId: string, latestNumber: number, ba
 }
 
 /**
- * Saves a new revision on top of `baseRevision`. The scenario row is locked for the
- * transaction, so of two saves from the same base exactly one wins; the other gets 409 and
- * keeps its content on the client. The unique (scenario, number) pair is the second line.
+ * Saves a new revision on top of `baseRevision`: one statement moves the scenario's newest
+ * revision on, inserts the revision and its audit event (db/queries/save-revision.ts), so of two
+ * saves from the same base exactly one wins; the other gets 409 and keeps its content on the
+ * client. The unique (scenario, number) pair is the second line. The answer is built from what
+ * was written (the author is the signed-in actor), not read back.
  */
 export async function saveRevision(
   db: Db,
@@ -81,44 +82,34 @@ export async function saveRevision(
   const ctx = await authorizeTeam(db, actor, teamSlug, "scenario:edit");
   const data = parseWithPath(saveRevisionSchema, input);
   parseScenarioFileOrThrow(data.file);
-  const { id } = await scenarioInTeam(db, ctx.team.id, scenarioId);
-  let outcome: { number: number } | { conflict: number };
+  const id = requireUuid(scenarioId, "scenario");
+  const now = new Date();
+  let saved: { id: string; number: number } | null;
   try {
-    outcome = await db.transaction(async (tx) => {
-      const row = await scenarioInTeam(tx, ctx.team.id, id, true);
-      if (data.baseRevision > row.latestRevision) {
-        throw new AppError(
-          "invalid:baseRevision",
-          `This scenario has no revision ${data.baseRevision} (the newest is ${row.latestRevision}).`,
-          "baseRevision",
-        );
-      }
-      if (data.baseRevision !== row.latestRevision) return { conflict: row.latestRevision };
-      const number = row.latestRevision + 1;
-      const now = new Date();
-      await insertRevision(tx, {
-        scenarioId: row.id,
-        number,
-        authorId: ctx.actor.id,
-        message: data.message,
-        file: data.file as Record<string, unknown>,
-        createdAt: now,
-      });
-      await setLatestRevision(tx, row.id, number, now);
-      await recordAudit(tx, {
-        actorId: ctx.actor.id,
-        teamId: ctx.team.id,
-        action: "revision.save",
-        target: row.id,
-        detail: { number, base: data.baseRevision },
-      });
-      return { number };
+    saved = await insertRevisionOnTop(db, {
+      scenarioId: id,
+      teamId: ctx.team.id,
+      base: data.baseRevision,
+      authorId: ctx.actor.id,
+      message: data.message,
+      // Stored as sent (once valid): top-level editor metadata such as chart setup survives.
+      file: data.file as Record<string, unknown>,
+      at: now,
     });
   } catch (error) {
     if (!isUniqueViolation(error)) throw error;
-    const row = await scenarioInTeam(db, ctx.team.id, id);
-    outcome = { conflict: row.latestRevision };
+    saved = null;
   }
-  if ("conflict" in outcome) throw await conflictWith(db, id, outcome.conflict, data.baseRevision);
-  return (await findRevisionMeta(db, id, outcome.number))!;
+  if (saved) return newRevisionMeta(saved, ctx.actor, data.message, now);
+  // Nothing written: another team's or an unknown scenario (404), a base from the future, or
+  // someone saved since the base (409).
+  const row = await scenarioInTeam(db, ctx.team.id, id);
+  if (data.baseRevision > row.latestRevision) {
+    throw new AppError(
+      "invalid:baseRevision",
+      `This scenario has no revision ${data.baseRevision} (the newest is ${row.latestRevision}).`,
+      "baseRevision",
+    );
+  }
+  throw await conflictWith(db, id, row.latestRevision, data.baseRevision);
 }

@@ -71,6 +71,14 @@ describe("the scenarios list", () => {
       expect.stringMatching(/^Scenario-/),
     ]);
 
+    // The total rides on the page's rows; a page past the end has none and still counts.
+    expect(await list({ sort: "name", pageSize: "2", page: "9" })).toMatchObject({
+      items: [],
+      total: 4,
+      page: 9,
+    });
+    expect((await list({ tag: "shear", pageSize: "1", page: "5" })).total).toBe(2);
+
     const charlie = byUpdated.items[1];
     expect(charlie.latestRevision).toMatchObject({
       number: 2,
