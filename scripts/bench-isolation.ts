@@ -20,6 +20,7 @@ import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { createScenario } from "@/lib/server/workspace/scenarios";
 
 import { sleep, startApp, stopApp, waitFor200 } from "./load/app-process";
+import { busiestThreads, threadTimes } from "./load/thread-cpu";
 
 const PORT = Number(process.env.BENCH_APP_PORT ?? 31000);
 const BASE = `http://127.0.0.1:${PORT}`;
@@ -112,6 +113,8 @@ async function main() {
     const ready = await waitFor200(`${BASE}/api/health`, {}, 120_000);
     console.log(`server ready in ${(ready / 1000).toFixed(1)} s on ${BASE}`);
 
+    const appThreadsBefore = threadTimes(app.pid!);
+    const benchCpuBefore = process.cpuUsage();
     const until = Date.now() + SECONDS * 1000;
     const statuses: Record<string, number> = {};
     const count = (what: string, status: number | "cut") => {
@@ -183,6 +186,13 @@ async function main() {
       conformanceClient(s.cookies[RUN_CLIENTS + 1]),
       ...Array.from({ length: HEALTH_CLIENTS }, healthClient),
     ]);
+    const benchCpu = process.cpuUsage(benchCpuBefore);
+    const busiest = busiestThreads(appThreadsBefore, threadTimes(app.pid!));
+    if (busiest.length > 0)
+      console.log(`CPU of the server's busiest threads:\n${busiest.join("\n")}`);
+    console.log(
+      `CPU of this bench process (all clients): ${((benchCpu.user + benchCpu.system) / 1e6).toFixed(1)} s in ${SECONDS} s`,
+    );
     const load = os
       .loadavg()
       .map((x) => x.toFixed(1))
