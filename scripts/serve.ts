@@ -114,7 +114,12 @@ async function runAppProcess() {
 }
 
 if (cluster.isPrimary) {
-  Object.assign(process.env, { NODE_ENV: "production" });
+  // The app processes inherit this environment: the compute pool sizes its threads by their number
+  // (lib/server/compute/limits.ts).
+  Object.assign(process.env, {
+    NODE_ENV: "production",
+    CRAQUELURE_APP_PROCESSES: String(processes),
+  });
   runPrimary();
 } else {
   runAppProcess().catch((error: unknown) => {
