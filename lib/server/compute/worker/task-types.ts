@@ -13,6 +13,7 @@ import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import type { Scenario } from "@/lib/scenario/scenario-schema";
+import type { BundleIdentity } from "@/lib/server/handoff/bundle/note";
 import type { ConformanceTolerance } from "@/lib/server/handoff/conformance/types";
 import type { HistoryMapping } from "@/lib/server/handoff/conformance/upload-schema";
 import type { RunRequest } from "@/lib/server/handoff/runs/run-request";
@@ -41,7 +42,13 @@ export type ComputeTask =
       free: FittableParam[];
       bounds: Bounds | undefined;
     }
-  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined };
+  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined }
+  | {
+      kind: "reference-bundle";
+      file: Record<string, unknown>;
+      scenario: Scenario;
+      identity: BundleIdentity;
+    };
 
 /** What a "read-curve-csv" task sends back: only what an upload stores, not the table's cells. */
 export type CurveCsvOutcome =
