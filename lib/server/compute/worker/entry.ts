@@ -33,7 +33,7 @@ function readCurveCsvInWorker(task: Extract<ComputeTask, { kind: "read-curve-csv
 function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
   switch (task.kind) {
     case "run":
-      return runInWorker(task.request, port);
+      return runInWorker(task.request, port, task.credit);
     case "report-curves":
       return reportCurvesInWorker(task.sets, task.legs, task.perSetBudgetMs);
     case "conformance": {

@@ -19,7 +19,12 @@ import type { HistoryMapping } from "@/lib/server/handoff/conformance/upload-sch
 import type { RunRequest } from "@/lib/server/handoff/runs/run-request";
 
 export type ComputeTask =
-  | { kind: "run"; request: RunRequest }
+  | {
+      kind: "run";
+      request: RunRequest;
+      /** Back-pressure (chunk-credit.ts); without it the worker posts as fast as it formats. */
+      credit?: Int32Array;
+    }
   | { kind: "report-curves"; sets: ParameterSet[]; legs: Leg[]; perSetBudgetMs: number }
   | {
       kind: "conformance";
