@@ -5,9 +5,14 @@
  * computed, 20 clients poll `GET /api/health`. The heavy work runs in the compute pool, so
  * health should answer as on a quiet server. Every client signs in as a person of its own: the
  * pool caps tasks per person.
+ *
+ * The heavy clients stand for remote users: they run in a child process at nice 10
+ * (load/isolation-load-child.ts), because on this one machine their own CPU — reading 4 × ~100 MB
+ * of run output — would otherwise take the cores from the server under test, which on a real
+ * deployment it would not. Same run size, same number of clients; the health pollers stay here
+ * at normal priority and time each answer.
  */
-import type { ChildProcess } from "node:child_process";
-import { readFileSync } from "node:fs";
+import { fork, type ChildProcess } from "node:child_process";
 import os from "node:os";
 import path from "node:path";
 
@@ -20,43 +25,13 @@ import { createSessionToken } from "@/lib/server/accounts/auth/session-token";
 import { createScenario } from "@/lib/server/workspace/scenarios";
 
 import { sleep, startApp, stopApp, waitFor200 } from "./load/app-process";
+import { largestFile, RUN_CLIENTS, type HeavyLoad, type HeavyResult } from "./load/isolation-load";
+import { busiestThreads, threadTimes } from "./load/thread-cpu";
 
 const PORT = Number(process.env.BENCH_APP_PORT ?? 31000);
 const BASE = `http://127.0.0.1:${PORT}`;
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 30);
-const RUN_CLIENTS = 4;
 const HEALTH_CLIENTS = 20;
-const HISTORY_ROWS = 100_000;
-
-/** 1,000,000 increments (the API's limit) of tension cycles below failure. */
-function largestFile() {
-  const file = JSON.parse(
-    readFileSync(path.join(process.cwd(), "test/fixtures/demo-scenario.json"), "utf8"),
-  );
-  const leg = (target: number) => ({
-    control: ["strain", "stress", "stress"],
-    target: [target, 0, 0],
-    increments: 250_000,
-  });
-  file.path.legs = [leg(0.006), leg(0), leg(0.006), leg(0)];
-  // Six sets, the loading desk's most: the report runs the path once per set.
-  file.parameterSets = [1, 2, 3, 4, 5, 6].map((i) => ({
-    ...file.parameterSets[0],
-    id: `S${i}`,
-    E1: 10_000 + 200 * i,
-  }));
-  return file;
-}
-
-/** A uniaxial strain ramp in the contract's columns; its stresses are invented (the check fails). */
-function historyCsv(): string {
-  const lines = ["increment,eps11,eps22,gam12,sig11,sig22,sig12"];
-  for (let i = 0; i < HISTORY_ROWS; i++) {
-    const e = (0.006 * i) / HISTORY_ROWS;
-    lines.push(`${i},${e},${-0.3 * e},0,${11_000 * e},0,0`);
-  }
-  return lines.join("\n") + "\n";
-}
 
 async function seed(db: Db, people: number) {
   const { hash, salt } = await hashPassword("bench password 1");
@@ -100,66 +75,54 @@ const p95 = (xs: number[]) => {
 };
 const ms1 = (x: number) => Math.round(x * 10) / 10;
 
+/**
+ * Starts the heavy clients' child process (nice 10) and waits until it is ready, so its start-up
+ * is not counted in the load window; `run` hands it the load and resolves with what it counted.
+ */
+async function forkHeavyClients() {
+  const child = fork(path.join(process.cwd(), "scripts/load/isolation-load-child.ts"), [], {
+    execArgv: ["--import", "tsx"],
+  });
+  const ended = new Promise<never>((_, reject) =>
+    child.once("exit", (code) => reject(new Error(`heavy clients ended (${code}) early`))),
+  );
+  const next = () => new Promise<unknown>((resolve) => child.once("message", resolve));
+  await Promise.race([next(), ended]);
+  return {
+    child,
+    run(load: HeavyLoad): Promise<HeavyResult> {
+      child.send(load);
+      return Promise.race([next() as Promise<HeavyResult>, ended]);
+    },
+  };
+}
+
 async function main() {
   const { db, close } = createDb(requireDatabaseUrl(), { max: 2 });
   let app: ChildProcess | undefined;
-  process.on("exit", () => stopApp(app));
+  let clients: ChildProcess | undefined;
+  process.on("exit", () => {
+    stopApp(app);
+    clients?.kill();
+  });
   try {
     const s = await seed(db, RUN_CLIENTS + 2);
-    const file = largestFile();
-    const history = historyCsv();
     app = startApp(PORT, process.env.BENCH_APP_LOG ?? "/dev/null");
     const ready = await waitFor200(`${BASE}/api/health`, {}, 120_000);
     console.log(`server ready in ${(ready / 1000).toFixed(1)} s on ${BASE}`);
 
+    const heavyClients = await forkHeavyClients();
+    clients = heavyClients.child;
+    const appThreadsBefore = threadTimes(app.pid!);
+    const benchCpuBefore = process.cpuUsage();
     const until = Date.now() + SECONDS * 1000;
-    const statuses: Record<string, number> = {};
-    const count = (what: string, status: number | "cut") => {
-      const key = `${what} ${status}`;
-      statuses[key] = (statuses[key] ?? 0) + 1;
-    };
-    /** One request, read to its end; a stream cut by the server (a run over budget) counts as "cut". */
-    const send = async (what: string, url: string, init: RequestInit): Promise<number> => {
-      try {
-        const res = await fetch(url, init);
-        const bytes = (await res.arrayBuffer()).byteLength;
-        count(what, res.status);
-        return res.status === 200 && bytes > 0 ? 200 : res.status;
-      } catch {
-        count(what, "cut");
-        return 0;
-      }
-    };
-    let runsOk = 0;
-    const runClient = async (cookie: string) => {
-      while (Date.now() < until) {
-        // The whole body is read: a run is only done once its output has arrived.
-        const status = await send("run", `${BASE}/api/v1/runs`, {
-          method: "POST",
-          headers: { cookie, "content-type": "application/json", origin: BASE },
-          body: JSON.stringify({ scenario: file, format: "csv" }),
-        });
-        if (status === 200) runsOk++;
-        if (status === 429 || status === 503) await sleep(1000);
-      }
-    };
-    const reportClient = async (cookie: string) => {
-      while (Date.now() < until) {
-        await send("report", `${BASE}/reports/${s.teamSlug}/${s.scenarioId}/1`, {
-          headers: { cookie },
-        });
-      }
-    };
-    const conformanceClient = async (cookie: string) => {
-      const url = `${BASE}/api/v1/teams/${s.teamSlug}/scenarios/${s.scenarioId}/revisions/1/conformance`;
-      while (Date.now() < until) {
-        await send("conformance", url, {
-          method: "POST",
-          headers: { cookie, "content-type": "application/json", origin: BASE },
-          body: JSON.stringify({ fileName: "bench-history.csv", text: history, set: "S1" }),
-        });
-      }
-    };
+    const heavy = heavyClients.run({
+      base: BASE,
+      until,
+      teamSlug: s.teamSlug,
+      scenarioId: s.scenarioId,
+      cookies: s.cookies,
+    });
     const health: number[] = [];
     let healthErrors = 0;
     const healthClient = async () => {
@@ -177,12 +140,18 @@ async function main() {
         await sleep(50);
       }
     };
-    await Promise.all([
-      ...s.cookies.slice(0, RUN_CLIENTS).map(runClient),
-      reportClient(s.cookies[RUN_CLIENTS]),
-      conformanceClient(s.cookies[RUN_CLIENTS + 1]),
+    const [{ statuses, runsOk, cpuSeconds }] = await Promise.all([
+      heavy,
       ...Array.from({ length: HEALTH_CLIENTS }, healthClient),
     ]);
+    const benchCpu = process.cpuUsage(benchCpuBefore);
+    const busiest = busiestThreads(appThreadsBefore, threadTimes(app.pid!));
+    if (busiest.length > 0)
+      console.log(`CPU of the server's busiest threads:\n${busiest.join("\n")}`);
+    console.log(`CPU of the heavy clients' process (nice 10): ${cpuSeconds.toFixed(1)} s`);
+    console.log(
+      `CPU of the health pollers' process: ${((benchCpu.user + benchCpu.system) / 1e6).toFixed(1)} s in ${SECONDS} s`,
+    );
     const load = os
       .loadavg()
       .map((x) => x.toFixed(1))
@@ -200,6 +169,7 @@ async function main() {
       `bench:isolation: health_p95=${ms1(p95(health))} health_max=${ms1(Math.max(...health))} runs_ok=${runsOk}`,
     );
   } finally {
+    clients?.kill();
     stopApp(app);
     await close();
   }

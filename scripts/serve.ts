@@ -4,7 +4,8 @@
  * Run: node --import tsx scripts/serve.ts  (scripts/start.sh, the browser tests and the benches do).
  *
  * Settings: PORT (3000), HOST (127.0.0.1), CRAQUELURE_APP_PROCESSES (default: one per core, at
- * least two). SIGTERM or SIGINT stops every app process, then the primary.
+ * least two), CRAQUELURE_LOOP_DELAY_LOG=1 (each app process logs its event-loop delay every 2 s:
+ * the benches use it to tell a busy request thread from a busy machine). SIGTERM or SIGINT stops every app process, then the primary.
  *
  * Every request gets `x-craquelure-peer` set from its socket, and any copy the client sent is
  * dropped first: lib/server/accounts/auth/client-address.ts keys the rate limits on it.
@@ -12,6 +13,7 @@
 import cluster from "node:cluster";
 import http from "node:http";
 import os from "node:os";
+import { monitorEventLoopDelay } from "node:perf_hooks";
 
 import { stampPeer } from "@/lib/server/http/client-peer";
 
@@ -70,6 +72,19 @@ function runPrimary() {
   process.on("SIGINT", stop);
 }
 
+/** How late this process's timers fire: time its request thread was busy (or not given a core). */
+function logLoopDelay() {
+  const delay = monitorEventLoopDelay({ resolution: 10 });
+  delay.enable();
+  const ms = (ns: number) => (ns / 1e6).toFixed(1);
+  setInterval(() => {
+    log(
+      `loop delay p50=${ms(delay.percentile(50))} p99=${ms(delay.percentile(99))} max=${ms(delay.max)} ms`,
+    );
+    delay.reset();
+  }, 2_000).unref();
+}
+
 async function runAppProcess() {
   // Imported here so the primary never loads Next (it only balances).
   const { default: next } = await import("next");
@@ -84,6 +99,7 @@ async function runAppProcess() {
   server.keepAliveTimeout = KEEP_ALIVE_MS;
   server.headersTimeout = KEEP_ALIVE_MS + 1_000;
   server.listen(port, host);
+  if (process.env.CRAQUELURE_LOOP_DELAY_LOG === "1") logLoopDelay();
 
   // SIGINT reaches the whole process group on Ctrl-C; the primary decides, so ignore it here.
   process.on("SIGINT", () => {});
@@ -98,7 +114,12 @@ async function runAppProcess() {
 }
 
 if (cluster.isPrimary) {
-  Object.assign(process.env, { NODE_ENV: "production" });
+  // The app processes inherit this environment: the compute pool sizes its threads by their number
+  // (lib/server/compute/limits.ts).
+  Object.assign(process.env, {
+    NODE_ENV: "production",
+    CRAQUELURE_APP_PROCESSES: String(processes),
+  });
   runPrimary();
 } else {
   runAppProcess().catch((error: unknown) => {

@@ -24,7 +24,13 @@ export class ComputeBusy extends AppError {
 
 /** What the task was, in the words the message uses. */
 export type TaskLabel =
-  "run" | "report" | "conformance check" | "identification" | "fit replay" | "file reading";
+  | "run"
+  | "report"
+  | "conformance check"
+  | "identification"
+  | "fit replay"
+  | "file reading"
+  | "reference bundle";
 
 const ADVICE: Record<TaskLabel, string> = {
   run: "Try fewer increments (or fewer legs), or run the file on your own machine with the command-line driver (npm run drive).",
@@ -33,6 +39,8 @@ const ADVICE: Record<TaskLabel, string> = {
   identification: "Try fewer or shorter test records.",
   "fit replay": "Try fewer or shorter test records.",
   "file reading": "Try a smaller file.",
+  "reference bundle":
+    "Try again when the server is less busy, or with fewer parameter sets in this revision.",
 };
 
 export function overBudget(label: TaskLabel, budgetMs: number): AppError {

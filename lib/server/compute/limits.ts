@@ -23,9 +23,26 @@ function positiveInt(value: string | undefined): number | null {
   return Number.isInteger(n) && n > 0 ? n : null;
 }
 
-/** `cores` is the machine's parallelism; one core is left to the request thread. */
+/**
+ * Compute threads of one app process. The rule: on a machine with `cores` ≥ 2, all app processes
+ * together run at most `cores − 1` compute threads, so one core is always left to the request
+ * threads: each of `processes` app processes (scripts/serve.ts says how many through
+ * CRAQUELURE_APP_PROCESSES) gets `floor((cores − 1) / processes)`. A process needs at least one
+ * thread to compute at all, so where there are more processes than `cores − 1` (2 cores, 2
+ * processes) each keeps one and the total is one over: there the compute threads' nice 10
+ * (worker/niceness.ts) is what keeps the request threads first. One core: one thread.
+ */
+export function defaultComputeThreads(cores: number, processes: number): number {
+  return Math.max(1, Math.floor((cores - 1) / Math.max(1, processes)));
+}
+
+/**
+ * `cores` is the machine's parallelism. COMPUTE_THREADS, when set, overrides the rule above;
+ * without CRAQUELURE_APP_PROCESSES (next dev, the tests) this is the only app process.
+ */
 export function computeLimits(env: Env, cores: number): ComputeLimits {
-  const threads = positiveInt(env.COMPUTE_THREADS) ?? Math.max(1, cores - 1);
+  const processes = positiveInt(env.CRAQUELURE_APP_PROCESSES) ?? 1;
+  const threads = positiveInt(env.COMPUTE_THREADS) ?? defaultComputeThreads(cores, processes);
   return {
     threads,
     maxTasks: positiveInt(env.COMPUTE_MAX_TASKS) ?? Math.max(8, threads * 4),

@@ -4,11 +4,13 @@
  * pool's gate) instead of doing the work on the request thread. Once the slot is free the same
  * request succeeds, so the 429 is the gate's and nothing else's.
  */
+import JSZip from "jszip";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 
 import * as identifyRoute from "@/app/api/v1/teams/[team]/fits/identify/route";
 import * as fitsRoute from "@/app/api/v1/teams/[team]/fits/route";
 import * as recordsRoute from "@/app/api/v1/teams/[team]/test-records/route";
+import * as bundleRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/bundle/route";
 import * as checksRoute from "@/app/api/v1/teams/[team]/scenarios/[scenario]/revisions/[number]/conformance/route";
 import { closeComputePool, startTask, tasksInFlight } from "@/lib/server/compute/pool";
 import { ComputeBusy } from "@/lib/server/compute/errors";
@@ -173,5 +175,32 @@ describe("request-thread callers go through the compute pool", () => {
     expect(report.statuses.map((s) => s.setId)).toEqual(setIds);
     expect(report.charts.stressStrain.paths.map((p) => p.name)).toEqual(setIds);
     expect(report.charts.tension.paths).toHaveLength(setIds.length);
+  });
+
+  it("reference bundle: the standard load cases run in the pool", async () => {
+    const viewer = w.members.viewer;
+    const viewerToken = (await tokenFor(db, viewer, w.slug, "viewer")).token;
+    const fetchBundle = () =>
+      bundleRoute.GET(new Request("http://app.test/x", { headers: bearer(viewerToken) }), {
+        params: Promise.resolve({ team: w.slug, scenario: w.scenarioId, number: "1" }),
+      });
+    const release = holdSlot(viewer.id);
+    let held: Response;
+    try {
+      held = await fetchBundle();
+    } finally {
+      await release();
+    }
+    expect(held.status).toBe(429);
+    expect(held.headers.get("retry-after")).toMatch(/^\d+$/);
+    expect((await held.json()).error.code).toBe("rate-limited:compute");
+
+    const free = await fetchBundle();
+    expect(free.status).toBe(200);
+    expect(free.headers.get("content-type")).toBe("application/zip");
+    const zip = await JSZip.loadAsync(await free.arrayBuffer());
+    const curves = Object.keys(zip.files).filter((name) => name.endsWith(".csv"));
+    // Six standard cases per set (load-cases.ts), each with its curve.
+    expect(curves).toHaveLength(6 * DEMO_FILE.parameterSets.length);
   });
 });

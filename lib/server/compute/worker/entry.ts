@@ -9,6 +9,7 @@ import { uncertaintyAt } from "@/lib/calibration/refine";
 import { replayError, canReplay } from "@/lib/calibration/replay";
 import { readCurveCsv } from "@/lib/csv/read-curve-csv";
 import { isAppError } from "@/lib/shared/errors";
+import { buildReferenceBundle } from "@/lib/server/handoff/bundle/build";
 import { runConformance } from "@/lib/server/handoff/conformance/run-check";
 import { DetailedAppError } from "@/lib/server/workspace/errors";
 
@@ -32,7 +33,7 @@ function readCurveCsvInWorker(task: Extract<ComputeTask, { kind: "read-curve-csv
 function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
   switch (task.kind) {
     case "run":
-      return runInWorker(task.request, port);
+      return runInWorker(task.request, port, task.credit);
     case "report-curves":
       return reportCurvesInWorker(task.sets, task.legs, task.perSetBudgetMs);
     case "conformance": {
@@ -60,14 +61,18 @@ function perform(task: ComputeTask, port: PostedTask["port"]): unknown {
       return uncertaintyAt(task.records, task.params, { free: task.free, bounds: task.bounds });
     case "read-curve-csv":
       return readCurveCsvInWorker(task);
+    case "reference-bundle":
+      // Every standard load case of every set is run and zipped here: only the zip comes back.
+      return buildReferenceBundle(task.file, task.scenario, task.identity);
   }
 }
 
-export default function computeTask(posted: PostedTask): TaskOutcome {
+export default async function computeTask(posted: PostedTask): Promise<TaskOutcome> {
   const { port, ...task } = posted;
   port.postMessage({ type: "start" });
   try {
-    return { ok: true, value: perform(task as ComputeTask, port) };
+    // Awaited here so a task that ends in a promise (the bundle's zip) sends its value, not the promise.
+    return { ok: true, value: await perform(task as ComputeTask, port) };
   } catch (error) {
     if (!isAppError(error)) throw error;
     return {

@@ -13,12 +13,18 @@ import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import type { Scenario } from "@/lib/scenario/scenario-schema";
+import type { BundleIdentity } from "@/lib/server/handoff/bundle/note";
 import type { ConformanceTolerance } from "@/lib/server/handoff/conformance/types";
 import type { HistoryMapping } from "@/lib/server/handoff/conformance/upload-schema";
 import type { RunRequest } from "@/lib/server/handoff/runs/run-request";
 
 export type ComputeTask =
-  | { kind: "run"; request: RunRequest }
+  | {
+      kind: "run";
+      request: RunRequest;
+      /** Back-pressure (chunk-credit.ts); without it the worker posts as fast as it formats. */
+      credit?: Int32Array;
+    }
   | { kind: "report-curves"; sets: ParameterSet[]; legs: Leg[]; perSetBudgetMs: number }
   | {
       kind: "conformance";
@@ -41,7 +47,13 @@ export type ComputeTask =
       free: FittableParam[];
       bounds: Bounds | undefined;
     }
-  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined };
+  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined }
+  | {
+      kind: "reference-bundle";
+      file: Record<string, unknown>;
+      scenario: Scenario;
+      identity: BundleIdentity;
+    };
 
 /** What a "read-curve-csv" task sends back: only what an upload stores, not the table's cells. */
 export type CurveCsvOutcome =

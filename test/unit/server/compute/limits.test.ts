@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 
 import { overBudget, ComputeBusy } from "@/lib/server/compute/errors";
-import { computeLimits } from "@/lib/server/compute/limits";
+import { computeLimits, defaultComputeThreads } from "@/lib/server/compute/limits";
 import { errorResponse } from "@/lib/server/http/respond";
 
 describe("computeLimits", () => {
@@ -35,6 +35,22 @@ describe("computeLimits", () => {
       budgetMs: 1500,
       retryAfterSeconds: 5,
     });
+  });
+
+  it("shares cores − 1 compute threads among the app processes, at least one each", () => {
+    // The rule of limits.ts: threads × processes ≤ cores − 1 wherever one thread each fits.
+    expect(defaultComputeThreads(8, 1)).toBe(7);
+    expect(defaultComputeThreads(8, 8)).toBe(1); // 8 processes × 1 = 8: one each is the floor
+    expect(defaultComputeThreads(16, 4)).toBe(3); // 4 × 3 = 12 ≤ 15
+    expect(defaultComputeThreads(16, 16)).toBe(1);
+    expect(defaultComputeThreads(9, 2)).toBe(4); // 2 × 4 = 8 ≤ 8
+    expect(defaultComputeThreads(2, 2)).toBe(1);
+    expect(defaultComputeThreads(1, 2)).toBe(1);
+    expect(computeLimits({ CRAQUELURE_APP_PROCESSES: "4" }, 16).threads).toBe(3);
+    expect(computeLimits({ CRAQUELURE_APP_PROCESSES: "4", COMPUTE_THREADS: "5" }, 16).threads).toBe(
+      5,
+    );
+    expect(computeLimits({ CRAQUELURE_APP_PROCESSES: "junk" }, 8).threads).toBe(7);
   });
 
   it("still reads the older RUN_TIME_BUDGET_MS when the new name is unset", () => {
