@@ -38,7 +38,7 @@ export function PreviewTable({ headers, rows, lines, rowCount }: PreviewTablePro
         </tbody>
       </table>
       <p className="mt-1 text-xs text-ink-faint">
-        First {rows.length} of {rowCount} data rows.
+        The first {rows.length} of {rowCount.toLocaleString("en-US")} data rows.
       </p>
     </div>
   );

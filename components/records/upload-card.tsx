@@ -99,6 +99,10 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
       {result && !result.ok ? <FieldError message={result.error.message} /> : null}
       {preview ? (
         <>
+          <p className="text-sm text-ink-soft">
+            {preview.rowCount} rows, delimiter “{preview.delimiter}”
+            {preview.decimalComma ? ", decimal commas" : ""}.
+          </p>
           <PreviewTable
             headers={preview.headers}
             rows={preview.firstRows}
