@@ -5,8 +5,8 @@
  */
 import { z } from "zod";
 
-import type { Delimiter } from "./detect-delimiter";
-import { parseNumberCell } from "./number-cell";
+import { detectDelimiter, type Delimiter } from "./detect-delimiter";
+import { looksLikeDecimalComma, parseNumberCell } from "./number-cell";
 
 export const layoutSchema = z.strictObject({
   skipLines: z.number().int().min(0).max(1000).optional(),
@@ -48,8 +48,17 @@ function cellsOf(line: string, delimiter: Delimiter): string[] {
   return line.split(delimiter).map((c) => c.trim().replace(/^"(.*)"$/, "$1"));
 }
 
+/**
+ * A data row: at least two cells are numbers and they are the majority. A column of notes beside
+ * the numbers keeps a row a data row; a metadata line such as "Nominal width;10,0" is not one.
+ */
 function isNumericRow(cells: string[], decimalComma: boolean): boolean {
-  return cells.length >= 2 && cells.every((c) => parseNumberCell(c, decimalComma) !== null);
+  const numbers = cells.filter((c) => parseNumberCell(c, decimalComma) !== null).length;
+  return numbers >= 2 && 2 * numbers > cells.length;
+}
+
+function isTextRow(cells: string[], decimalComma: boolean): boolean {
+  return cells.some((c) => c !== "" && parseNumberCell(c, decimalComma) === null);
 }
 
 interface Candidate {
@@ -99,14 +108,24 @@ export function detectLayout(text: string): FileLayout {
     }
   }
   if (best === null || best.numericRows === 0) {
-    return { skipLines: 0, headerRow: true, unitRow: false, delimiter: ",", decimalComma: false };
+    // Nothing reads as numbers: leave the table where it was, the reader will name the line.
+    const delimiter = detectDelimiter(text);
+    const first = lines.find((l) => l.trim() !== "") ?? "";
+    const cells = cellsOf(first, delimiter);
+    const decimalComma = delimiter !== "," && cells.some(looksLikeDecimalComma);
+    const headerRow = isTextRow(cells, decimalComma);
+    return { skipLines: 0, headerRow, unitRow: false, delimiter, decimalComma };
   }
   const { delimiter, decimalComma, width, firstData } = best;
   const textRowAbove = (index: number) => {
     const i = previousFilled(lines, index);
     if (i < 0) return -1;
     const cells = cellsOf(lines[i], delimiter);
-    return cells.length === width && !isNumericRow(cells, decimalComma) ? i : -1;
+    return cells.length === width &&
+      !isNumericRow(cells, decimalComma) &&
+      isTextRow(cells, decimalComma)
+      ? i
+      : -1;
   };
   const above = textRowAbove(firstData);
   if (above < 0) {

@@ -87,3 +87,23 @@ describe("reading under the detected layout", () => {
       expect(result.error.message).toMatch(/^line 1: only one column found.*"Lines to skip"/);
   });
 });
+
+describe("rows that are data although not every cell is a number", () => {
+  it("a column of notes beside the numbers keeps the header on line 1", () => {
+    expect(detectLayout("strain;stress;note\n0,001;10;a\n0,002;20;b\n")).toEqual({
+      skipLines: 0,
+      headerRow: true,
+      unitRow: false,
+      delimiter: ";",
+      decimalComma: true,
+    });
+  });
+
+  it("a file with no numbers at all is left as it is (the reader names the line)", () => {
+    expect(detectLayout("a;b\nc;d\n")).toMatchObject({
+      skipLines: 0,
+      delimiter: ";",
+      headerRow: true,
+    });
+  });
+});
