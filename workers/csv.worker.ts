@@ -5,11 +5,11 @@
  */
 import * as Comlink from "comlink";
 
-import type { ColumnMappingInput } from "@/lib/csv/record-schema";
+import type { RecordMappingInput } from "@/lib/csv/record-mapping";
 import { previewCsv } from "@/lib/shared/records/csv-preview";
 
 const api = {
-  preview(text: string, mapping?: ColumnMappingInput) {
+  preview(text: string, mapping?: RecordMappingInput) {
     return previewCsv(text, mapping);
   },
 };

@@ -3,12 +3,12 @@
 import * as Comlink from "comlink";
 import { useEffect, useRef, useState } from "react";
 
-import type { ColumnMappingInput } from "@/lib/csv/record-schema";
+import type { RecordMappingInput } from "@/lib/csv/record-mapping";
 import type { PreviewResult } from "@/lib/shared/records/csv-preview";
 import type { CsvWorkerApi } from "@/workers/csv.worker";
 
 /** Parses `text` in the CSV worker whenever the text or the mapping changes. */
-export function useCsvPreview(text: string | null, mapping: ColumnMappingInput | undefined) {
+export function useCsvPreview(text: string | null, mapping: RecordMappingInput | undefined) {
   const api = useRef<Comlink.Remote<CsvWorkerApi> | null>(null);
   const [result, setResult] = useState<PreviewResult | null>(null);
   const key = JSON.stringify(mapping ?? null);
@@ -27,7 +27,7 @@ export function useCsvPreview(text: string | null, mapping: ColumnMappingInput |
   useEffect(() => {
     if (text === null || !api.current) return;
     let live = true;
-    const chosen = JSON.parse(key) as ColumnMappingInput | null;
+    const chosen = JSON.parse(key) as RecordMappingInput | null;
     api.current.preview(text, chosen ?? undefined).then(
       (r) => live && setResult(r),
       () => live && setResult(null),

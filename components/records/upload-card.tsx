@@ -10,14 +10,19 @@ import {
   readCouponOrientation,
   type CouponOrientationDraft,
 } from "@/lib/calibration/micromechanics/coupon-orientation";
-import { testRecordMetaSchema, type ColumnMappingInput } from "@/lib/csv/record-schema";
+import type { LayoutChoice } from "@/lib/csv/file-layout";
+import type { Geometry, RecordMappingInput } from "@/lib/csv/record-mapping";
+import { testRecordMetaSchema } from "@/lib/csv/record-schema";
 
 import { CouponOrientationFields } from "./coupon-orientation-fields";
 
 import { CurveChart } from "./curve-chart";
+import { GeometryFields } from "./geometry-fields";
+import { LayoutFields } from "./layout-fields";
 import { MappingFields } from "./mapping-fields";
 import { MetaFields, type MetaInput, type MetaOutput } from "./meta-fields";
 import { postJson } from "./post-json";
+import { PreviewTable } from "./preview-table";
 import { useCsvPreview } from "../../workers/use-csv-preview";
 
 export interface UploadCardProps {
@@ -28,10 +33,18 @@ export interface UploadCardProps {
   onRemove: () => void;
 }
 
-/** One file of an upload: preview, column mapping, metadata, then the server's verdict. */
+/**
+ * One file of an upload: its layout (detected, changeable), the preview table, the columns (stress
+ * and strain, or force and extension with the specimen's geometry), the converted curve, the
+ * metadata, then the server's verdict. Saving stays off, with the reason in words, until the
+ * curve can be made.
+ */
 export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadCardProps) {
-  const [mapping, setMapping] = useState<ColumnMappingInput | undefined>(undefined);
-  const result = useCsvPreview(file.text, mapping);
+  const [layout, setLayout] = useState<LayoutChoice>({});
+  const [columns, setColumns] = useState<RecordMappingInput | undefined>(undefined);
+  const [geometry, setGeometry] = useState<Geometry>({});
+  const request: RecordMappingInput = { ...columns, geometry, layout };
+  const result = useCsvPreview(file.text, request);
   const [serverError, setServerError] = useState<string | null>(null);
   const [coupon, setCoupon] = useState<CouponOrientationDraft | null>(null);
   const [couponError, setCouponError] = useState<string | undefined>(undefined);
@@ -41,7 +54,15 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
   });
   const id = `upload-${index}`;
   const preview = result?.ok ? result.preview : null;
-  const shown = mapping ?? (preview?.suggested as ColumnMappingInput | undefined);
+  const shown = preview?.mapping;
+  const layoutShown = preview ?? (result && !result.ok && result.detected ? result : null);
+  const whyNot = !preview
+    ? null
+    : (preview.missing ?? (preview.error ? "Fix the problem named above before saving." : null));
+  const changeLayout = (next: LayoutChoice) => {
+    setLayout(next);
+    setColumns(undefined); // other lines give other columns: start from the new suggestion
+  };
 
   const submit = form.handleSubmit(async (meta) => {
     setServerError(null);
@@ -67,6 +88,14 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
         </button>
       </div>
       {result === null ? <p className="text-sm text-ink-soft">Reading the file…</p> : null}
+      {layoutShown?.detected && layoutShown.layout ? (
+        <LayoutFields
+          idPrefix={id}
+          detected={layoutShown.detected}
+          value={layoutShown.layout}
+          onChange={changeLayout}
+        />
+      ) : null}
       {result && !result.ok ? <FieldError message={result.error.message} /> : null}
       {preview ? (
         <>
@@ -74,11 +103,24 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
             {preview.rowCount} rows, delimiter “{preview.delimiter}”
             {preview.decimalComma ? ", decimal commas" : ""}.
           </p>
+          <PreviewTable
+            headers={preview.headers}
+            rows={preview.firstRows}
+            lines={preview.firstLines}
+            rowCount={preview.rowCount}
+          />
           <MappingFields
             idPrefix={id}
             headers={preview.headers}
-            value={shown ?? { strain: 0, stress: 1 }}
-            onChange={setMapping}
+            value={shown ?? {}}
+            onChange={(next) => setColumns({ ...next, geometry: undefined, layout: undefined })}
+          />
+          <GeometryFields
+            idPrefix={id}
+            value={geometry}
+            needsSection={shown?.stress === undefined && shown?.force !== undefined}
+            needsGauge={shown?.strain === undefined && shown?.extension !== undefined}
+            onChange={setGeometry}
           />
           {preview.error ? <FieldError message={preview.error.message} /> : null}
           {preview.warnings.map((w) => (
@@ -105,9 +147,21 @@ export function UploadCard({ index, teamSlug, file, onSaved, onRemove }: UploadC
               error={couponError}
             />
             <FieldError message={serverError ?? undefined} />
-            <Button type="submit" pending={form.formState.isSubmitting} disabled={!preview.curve}>
-              Save test record
-            </Button>
+            <div className="flex flex-wrap items-center gap-3">
+              <Button
+                type="submit"
+                pending={form.formState.isSubmitting}
+                disabled={!preview.curve}
+                aria-describedby={whyNot ? `${id}-why-not` : undefined}
+              >
+                Save test record
+              </Button>
+              {whyNot ? (
+                <p id={`${id}-why-not`} className="text-sm text-ink-soft">
+                  {whyNot}
+                </p>
+              ) : null}
+            </div>
           </form>
         </>
       ) : null}

@@ -10,6 +10,9 @@ import {
 } from "drizzle-orm/pg-core";
 
 import type { CouponOrientation } from "@/lib/calibration/micromechanics/coupon-orientation";
+import type { Conversion } from "@/lib/csv/convert-quantities";
+import type { FileLayout } from "@/lib/csv/file-layout";
+import type { Geometry } from "@/lib/csv/record-mapping";
 
 import { teams } from "./teams";
 import { users } from "./users";
@@ -34,6 +37,12 @@ export interface StoredMapping {
   shearStress?: number;
   strainUnit: string;
   stressUnit: string;
+  /** Force and extension columns of a machine file, when stress and strain were derived. */
+  force?: number;
+  extension?: number;
+  conversion?: Conversion;
+  geometry?: Geometry; // mm
+  layout?: FileLayout; // how the file was read (older records: plain CSV, header on line 1)
 }
 
 // An uploaded coupon curve. The original file is kept beside the parsed points so every fit can

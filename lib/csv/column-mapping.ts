@@ -3,6 +3,7 @@
  * confirms or corrects it in the mapping step; the guess never decides silently.
  */
 import { findTrailingUnit } from "./trailing-unit";
+import { forceUnitFromHeader, lengthUnitFromHeader } from "./units";
 
 export const CHANNELS = [
   "strain",
@@ -34,6 +35,38 @@ export function headerName(header: string): string {
   const unit = findTrailingUnit(header);
   const bare = unit === null ? header : header.slice(0, unit.open);
   return bare.trim().toLowerCase();
+}
+
+export type Quantity = Channel | "force" | "extension";
+export type QuantityMapping = Partial<Record<Quantity, number>>;
+
+const FORCE_NAME = /force|load/;
+const EXTENSION_NAME = /extension|displacement|elongation|crosshead|stroke|travel/;
+
+/**
+ * Like suggestMapping, and a machine's force and extension columns too: a force unit (N, kN) or
+ * a force name without another unit; a length unit (mm, µm) or an extension name without one.
+ */
+export function suggestQuantities(headers: string[], hasHeader: boolean): QuantityMapping {
+  if (!hasHeader) return suggestMapping(headers, hasHeader);
+  const unitless = (h: string) => findTrailingUnit(h) === null;
+  const force = headers.findIndex(
+    (h) => forceUnitFromHeader(h) !== null || (unitless(h) && FORCE_NAME.test(headerName(h))),
+  );
+  const extension = headers.findIndex(
+    (h, i) =>
+      i !== force &&
+      (lengthUnitFromHeader(h) !== null || (unitless(h) && EXTENSION_NAME.test(headerName(h)))),
+  );
+  const taken = new Set([force, extension].filter((i) => i >= 0));
+  const rest = suggestMapping(
+    headers.map((h, i) => (taken.has(i) ? "" : h)),
+    hasHeader,
+  );
+  const mapping: QuantityMapping = { ...rest };
+  if (force >= 0) mapping.force = force;
+  if (extension >= 0) mapping.extension = extension;
+  return mapping;
 }
 
 export function suggestMapping(headers: string[], hasHeader: boolean): ColumnMapping {

@@ -8,6 +8,7 @@
 import Papa from "papaparse";
 import { csvError, type CsvError } from "./csv-error";
 import { detectDelimiter, type Delimiter } from "./detect-delimiter";
+import { offsetAfterLines, withUnit } from "./file-layout";
 import {
   MAX_COLUMNS,
   MAX_DATA_ROWS,
@@ -26,6 +27,7 @@ export interface CurveTable {
   headers: string[]; // from the header row, or "column 1", "column 2", …
   hasHeader: boolean;
   headerLine: number; // physical line of the header (or of the first data row without one)
+  unitLine: number | null; // physical line of the unit row, if the file has one
   delimiter: Delimiter;
   decimalComma: boolean;
   rowCount: number;
@@ -39,6 +41,9 @@ export type TableResult = { ok: true; table: CurveTable } | { ok: false; error: 
 export interface ParseTableOptions {
   delimiter?: Delimiter; // detected when absent
   decimalComma?: boolean; // detected when absent
+  skipLines?: number; // physical lines before the header (a machine's metadata block)
+  headerRow?: boolean; // detected from the first row when absent
+  unitRow?: boolean; // the row under the header holds the units
 }
 
 export function parseCurveTable(text: string, options: ParseTableOptions = {}): TableResult {
@@ -46,18 +51,23 @@ export function parseCurveTable(text: string, options: ParseTableOptions = {}): 
     return fail(csvError("too-large", "The file is larger than 10 MB; split it or thin the rows."));
   }
   if (text.trim() === "") return fail(csvError("empty", "The file is empty."));
-  const delimiter = options.delimiter ?? detectDelimiter(text);
-  const decimalComma = options.decimalComma ?? detectDecimalComma(text, delimiter);
-  const builder = new TableBuilder(decimalComma);
+  const skipped = options.skipLines ?? 0;
+  const body = text.slice(offsetAfterLines(text, skipped));
+  if (body.trim() === "") {
+    return fail(csvError("empty", `nothing after the ${skipped} skipped lines.`, skipped));
+  }
+  const delimiter = options.delimiter ?? detectDelimiter(body);
+  const decimalComma = options.decimalComma ?? detectDecimalComma(body, delimiter);
+  const builder = new TableBuilder(decimalComma, options.headerRow, options.unitRow ?? false);
   let error: CsvError | null = null;
-  let newlines = 0;
+  let newlines = skipped;
   let cursor = 0;
-  Papa.parse<string[]>(text, {
+  Papa.parse<string[]>(body, {
     delimiter,
     step: (step, parser) => {
       const line = newlines + 1;
       const end = step.meta.cursor;
-      for (let i = cursor; i < end; i++) if (text.charCodeAt(i) === 10) newlines++;
+      for (let i = cursor; i < end; i++) if (body.charCodeAt(i) === 10) newlines++;
       cursor = end;
       const quoteError = step.errors.find((e) => e.type === "Quotes");
       error = quoteError
@@ -87,8 +97,13 @@ class TableBuilder {
   private lines: number[] = [];
   private firstBadCell: (BadCell | null)[] = [];
   private firstLine = 0;
+  private unitLine: number | null = null;
 
-  constructor(private readonly decimalComma: boolean) {}
+  constructor(
+    private readonly decimalComma: boolean,
+    private readonly headerRow: boolean | undefined,
+    private readonly unitRow: boolean,
+  ) {}
 
   add(cells: string[], line: number): CsvError | null {
     if (cells.length === 1 && cells[0].trim() === "") return null; // blank line
@@ -101,6 +116,8 @@ class TableBuilder {
       );
     }
     if (this.headers === null) return this.start(cells, line);
+    if (this.unitRow && this.hasHeader && this.unitLine === null)
+      return this.readUnits(cells, line);
     if (cells.length !== this.headers.length) {
       return csvError(
         "ragged",
@@ -124,11 +141,12 @@ class TableBuilder {
     if (cells.length < 2) {
       return csvError(
         "delimiter",
-        "only one column found; separate columns with a comma, a semicolon or a tab.",
+        'only one column found; separate columns with a comma, a semicolon or a tab, or raise "Lines to skip" past a block of notes above the table.',
         line,
       );
     }
-    this.hasHeader = cells.some((c) => parseNumberCell(c, this.decimalComma) === null);
+    this.hasHeader =
+      this.headerRow ?? cells.some((c) => parseNumberCell(c, this.decimalComma) === null);
     const longHeader = this.hasHeader
       ? cells.findIndex((c) => c.trim().length > MAX_HEADER_CELL_CHARS)
       : -1;
@@ -146,6 +164,21 @@ class TableBuilder {
     this.values = cells.map(() => []);
     this.firstBadCell = cells.map(() => null);
     if (!this.hasHeader) this.pushRow(cells, line);
+    return null;
+  }
+
+  /** The unit row: each cell becomes the unit of the header above it ("Force" → "Force [kN]"). */
+  private readUnits(cells: string[], line: number): CsvError | null {
+    const headers = this.headers as string[];
+    if (cells.length !== headers.length) {
+      return csvError(
+        "ragged",
+        `the unit row has ${cells.length} cells where the header (line ${this.firstLine}) has ${headers.length}.`,
+        line,
+      );
+    }
+    this.unitLine = line;
+    this.headers = headers.map((h, i) => withUnit(h, cells[i]));
     return null;
   }
 
@@ -170,6 +203,7 @@ class TableBuilder {
         headers: this.headers,
         hasHeader: this.hasHeader,
         headerLine: this.firstLine,
+        unitLine: this.unitLine,
         delimiter,
         decimalComma: this.decimalComma,
         rowCount: this.lines.length,

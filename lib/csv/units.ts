@@ -5,13 +5,17 @@
  */
 import { findTrailingUnit } from "./trailing-unit";
 
-export const STRAIN_UNITS = ["mm/mm", "percent"] as const;
+export const STRAIN_UNITS = ["mm/mm", "percent", "µm/m"] as const;
 export const STRESS_UNITS = ["Pa", "kPa", "MPa", "GPa"] as const;
 export type StrainUnit = (typeof STRAIN_UNITS)[number];
 export type StressUnit = (typeof STRESS_UNITS)[number];
 
 /** Factor to mm/mm. */
-export const STRAIN_FACTOR: Record<StrainUnit, number> = { "mm/mm": 1, percent: 0.01 };
+export const STRAIN_FACTOR: Record<StrainUnit, number> = {
+  "mm/mm": 1,
+  percent: 0.01,
+  "µm/m": 1e-6,
+};
 /** Factor to MPa. */
 export const STRESS_FACTOR: Record<StressUnit, number> = { Pa: 1e-6, kPa: 1e-3, MPa: 1, GPa: 1e3 };
 
@@ -26,6 +30,7 @@ export function strainUnitFromHeader(header: string): StrainUnit | null {
   if (unit === undefined) return null;
   if (unit === "%") return "percent";
   if (["mm/mm", "m/m", "-", "1", "in/in"].includes(unit)) return "mm/mm";
+  if (/^[µμu](m\/m|ε)$/.test(unit)) return "µm/m";
   return null;
 }
 
@@ -57,4 +62,28 @@ export function detectStrainUnit(values: ArrayLike<number>): StrainUnit {
 /** Spec E.1: max|stress| > 1e5 means Pa. */
 export function detectStressUnit(values: ArrayLike<number>): StressUnit {
   return maxAbs(values) > 1e5 ? "Pa" : "MPa";
+}
+
+/** Force and extension units a machine writes; the core wants N and mm before the geometry. */
+export const FORCE_UNITS = ["N", "kN"] as const;
+export const LENGTH_UNITS = ["mm", "µm"] as const;
+export type ForceUnit = (typeof FORCE_UNITS)[number];
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+/** Factor to N. */
+export const FORCE_FACTOR: Record<ForceUnit, number> = { N: 1, kN: 1e3 };
+/** Factor to mm. */
+export const LENGTH_FACTOR: Record<LengthUnit, number> = { mm: 1, µm: 1e-3 };
+
+export function forceUnitFromHeader(header: string): ForceUnit | null {
+  const unit = headerUnitText(header)?.replace(/\s/g, "").toLowerCase();
+  if (unit === "n") return "N";
+  if (unit === "kn") return "kN";
+  return null;
+}
+
+export function lengthUnitFromHeader(header: string): LengthUnit | null {
+  const unit = headerUnitText(header)?.replace(/\s/g, "").toLowerCase();
+  if (unit === "mm") return "mm";
+  if (unit !== undefined && /^[µμu]m$/.test(unit)) return "µm";
+  return null;
 }

@@ -3,7 +3,8 @@ import "server-only";
 /** The upload's body: the file as text plus the mapping step's and the form's answers. */
 import { z } from "zod";
 
-import { columnMappingSchema, testRecordMetaSchema } from "@/lib/csv/record-schema";
+import { recordMappingSchema } from "@/lib/csv/record-mapping";
+import { testRecordMetaSchema } from "@/lib/csv/record-schema";
 
 export const uploadTestRecordSchema = z.strictObject({
   name: z.string().trim().max(200, "Keep the name under 200 characters.").optional(),
@@ -13,7 +14,7 @@ export const uploadTestRecordSchema = z.strictObject({
     .min(1, "The file needs a name.")
     .max(255, "Keep the file name under 255 characters."),
   text: z.string({ error: "Send the file's text." }),
-  mapping: columnMappingSchema,
+  mapping: recordMappingSchema,
   meta: testRecordMetaSchema,
 });
 export type UploadTestRecordInput = z.input<typeof uploadTestRecordSchema>;

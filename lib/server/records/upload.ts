@@ -14,6 +14,13 @@ import { authorizeTeam } from "@/lib/server/access/team-access";
 import { DetailedAppError } from "@/lib/server/workspace/errors";
 import { parseWithPath } from "@/lib/server/workspace/parse";
 
+import type { StoredMapping } from "@/db/schema/test-records";
+import type { Conversion } from "@/lib/csv/convert-quantities";
+import type { CurvePoints } from "@/lib/csv/extract-points";
+import type { FileLayout } from "@/lib/csv/file-layout";
+import type { RecordMapping } from "@/lib/csv/record-mapping";
+import type { ColumnMappingChoice } from "@/lib/csv/record-schema";
+
 import { toStoredPoints } from "../../shared/records/stored-points";
 import { nameFromFile, uploadTestRecordSchema } from "./upload-schema";
 
@@ -26,6 +33,35 @@ function csvFailure(error: CsvError): AppError {
     { line: error.line, column: error.column, reason: error.code },
     "text",
   );
+}
+
+/**
+ * The record's mapping as stored: the columns extracted (a derived column's index is past the
+ * file's own, see `headers`), the units applied, and for a force/extension file the raw columns,
+ * their units and the geometry that made stress and strain; the layout the file was read with.
+ */
+function storedMapping(
+  input: RecordMapping,
+  choice: ColumnMappingChoice,
+  conversion: Conversion,
+  layout: FileLayout,
+  points: CurvePoints,
+): StoredMapping {
+  const { strainUnit: _s, stressUnit: _t, ...columns } = choice;
+  const stored: StoredMapping = {
+    ...columns,
+    strainUnit: points.strainUnit,
+    stressUnit: points.stressUnit,
+    layout,
+  };
+  if (input.force !== undefined && conversion.forceColumn !== undefined) stored.force = input.force;
+  if (input.extension !== undefined && conversion.extensionColumn !== undefined)
+    stored.extension = input.extension;
+  if (conversion.forceColumn !== undefined || conversion.extensionColumn !== undefined) {
+    stored.conversion = conversion;
+    stored.geometry = input.geometry;
+  }
+  return stored;
 }
 
 /**
@@ -42,10 +78,9 @@ export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, i
     "file reading",
   );
   if (!read.ok) throw csvFailure(read.error);
-  const { points, headers, warnings } = read;
+  const { points, headers, warnings, choice, conversion, layout } = read;
   const bytes = Buffer.from(data.text, "utf8");
   const name = data.name || nameFromFile(data.fileName);
-  const { strainUnit: _s, stressUnit: _t, ...columns } = data.mapping;
   return db.transaction(async (tx) => {
     const id = await insertTestRecord(tx, {
       teamId: ctx.team.id,
@@ -56,7 +91,7 @@ export async function uploadTestRecord(db: Db, actor: Actor, teamSlug: string, i
       laboratory: data.meta.laboratory || null,
       notes: data.meta.notes || null,
       couponOrientation: data.meta.couponOrientation ?? null,
-      mapping: { ...columns, strainUnit: points.strainUnit, stressUnit: points.stressUnit },
+      mapping: storedMapping(data.mapping, choice, conversion, layout, points),
       headers,
       warnings,
       points: toStoredPoints(points),

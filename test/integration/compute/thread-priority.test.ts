@@ -28,7 +28,7 @@ describe("compute threads yield to request threads", () => {
       {
         kind: "read-curve-csv",
         text: "strain,stress\n0,0\n0.001,10\n0.002,20\n",
-        mapping: undefined,
+        mapping: { strain: 0, stress: 1 },
       },
       null,
       "file reading",

@@ -53,7 +53,7 @@ describe("malformed files", () => {
     const error = rejected("strain|stress\n0.001|10\n0.002|20\n");
     expect(error.code).toBe("delimiter");
     expect(error.message).toBe(
-      "line 1: only one column found; separate columns with a comma, a semicolon or a tab.",
+      'line 1: only one column found; separate columns with a comma, a semicolon or a tab, or raise "Lines to skip" past a block of notes above the table.',
     );
   });
 

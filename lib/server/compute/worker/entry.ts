@@ -7,7 +7,7 @@
 import { identify } from "@/lib/calibration/identify";
 import { uncertaintyAt } from "@/lib/calibration/refine";
 import { replayError, canReplay } from "@/lib/calibration/replay";
-import { readCurveCsv } from "@/lib/csv/read-curve-csv";
+import { readRecordCsv } from "@/lib/csv/read-record-csv";
 import { isAppError } from "@/lib/shared/errors";
 import { buildReferenceBundle } from "@/lib/server/handoff/bundle/build";
 import { runConformance } from "@/lib/server/handoff/conformance/run-check";
@@ -23,9 +23,17 @@ lowerOwnPriority();
 
 function readCurveCsvInWorker(task: Extract<ComputeTask, { kind: "read-curve-csv" }>) {
   // Only what the upload stores comes back: the table's cells stay in the worker.
-  const read = readCurveCsv(task.text, task.mapping);
+  const read = readRecordCsv(task.text, task.mapping);
   const outcome: CurveCsvOutcome = read.ok
-    ? { ok: true, points: read.points, headers: read.table.headers, warnings: read.warnings }
+    ? {
+        ok: true,
+        points: read.points,
+        headers: read.table.headers,
+        warnings: read.warnings,
+        layout: read.layout,
+        choice: read.choice,
+        conversion: read.conversion,
+      }
     : { ok: false, error: read.error };
   return outcome;
 }

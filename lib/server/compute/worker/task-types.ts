@@ -9,7 +9,10 @@ import type { Bounds, FittableParam } from "@/lib/calibration/refine-params";
 import type { RecordPoints, TestRecordInput } from "@/lib/calibration/types";
 import type { CsvError } from "@/lib/csv/csv-error";
 import type { CurvePoints } from "@/lib/csv/extract-points";
-import type { ColumnMappingInput, TestType } from "@/lib/csv/record-schema";
+import type { Conversion } from "@/lib/csv/convert-quantities";
+import type { FileLayout } from "@/lib/csv/file-layout";
+import type { RecordMappingInput } from "@/lib/csv/record-mapping";
+import type { ColumnMappingChoice, TestType } from "@/lib/csv/record-schema";
 import type { Leg, MaterialParams } from "@/lib/mechanics/types";
 import type { ParameterSet } from "@/lib/scenario/parameter-set-schema";
 import type { Scenario } from "@/lib/scenario/scenario-schema";
@@ -47,7 +50,7 @@ export type ComputeTask =
       free: FittableParam[];
       bounds: Bounds | undefined;
     }
-  | { kind: "read-curve-csv"; text: string; mapping: ColumnMappingInput | undefined }
+  | { kind: "read-curve-csv"; text: string; mapping: RecordMappingInput }
   | {
       kind: "reference-bundle";
       file: Record<string, unknown>;
@@ -57,7 +60,15 @@ export type ComputeTask =
 
 /** What a "read-curve-csv" task sends back: only what an upload stores, not the table's cells. */
 export type CurveCsvOutcome =
-  | { ok: true; points: CurvePoints; headers: string[]; warnings: string[] }
+  | {
+      ok: true;
+      points: CurvePoints;
+      headers: string[];
+      warnings: string[];
+      layout: FileLayout;
+      choice: ColumnMappingChoice;
+      conversion: Conversion;
+    }
   | { ok: false; error: CsvError };
 
 /** A task as posted: the port carries "start" and, for runs, the streamed output. */

@@ -6,6 +6,7 @@ import { CurveChart } from "@/components/records/curve-chart";
 import { getDb } from "@/db/index";
 import { findTestRecordPoints, findTestRecordSummary } from "@/db/queries/test-records";
 import { requireTeamRole } from "@/lib/server/access/guard";
+import { conversionRows } from "@/lib/shared/records/conversion-words";
 import { thinForDisplay } from "@/lib/shared/records/stored-points";
 
 import { TeamNav } from "../../team-nav";
@@ -34,6 +35,7 @@ export default async function TestRecordPage({
     ["Temperature", record.temperature === null ? "—" : `${record.temperature} °C`],
     ["Laboratory", record.laboratory ?? "—"],
     ["Units read", `strain ${record.mapping.strainUnit}, stress ${record.mapping.stressUnit}`],
+    ...conversionRows(record.mapping),
     ["Points", record.pointCount.toLocaleString("en")],
     ["File", `${record.fileName} (${record.fileSize.toLocaleString("en")} bytes)`],
     ["SHA-256", record.fileSha256],
