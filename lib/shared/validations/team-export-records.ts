@@ -2,7 +2,9 @@ import { z } from "zod";
 
 import { couponOrientationSchema } from "@/lib/calibration/micromechanics/coupon-orientation";
 import { TEST_TYPES } from "@/lib/csv/record-schema";
-import { STRAIN_UNITS, STRESS_UNITS } from "@/lib/csv/units";
+import { layoutSchema } from "@/lib/csv/file-layout";
+import { geometrySchema } from "@/lib/csv/record-mapping";
+import { FORCE_UNITS, LENGTH_UNITS, STRAIN_UNITS, STRESS_UNITS } from "@/lib/csv/units";
 
 // Test records and fits in a team export (issue 13 item 8). A record's `key` is the exporting
 // team's id for it: fits and the scenario files' overlays name records by that key inside the
@@ -33,6 +35,20 @@ const mappingSchema = z.object({
   shearStress: column.optional(),
   strainUnit: z.enum(STRAIN_UNITS),
   stressUnit: z.enum(STRESS_UNITS),
+  // A machine file's record says how its stress and strain were made (raw columns, geometry,
+  // layout); records of plain curve files have none of these.
+  force: column.optional(),
+  extension: column.optional(),
+  conversion: z
+    .object({
+      forceColumn: z.string().max(200).optional(),
+      forceUnit: z.enum(FORCE_UNITS).optional(),
+      extensionColumn: z.string().max(200).optional(),
+      extensionUnit: z.enum(LENGTH_UNITS).optional(),
+    })
+    .optional(),
+  geometry: geometrySchema.optional(),
+  layout: layoutSchema.required().optional(),
 });
 
 export const exportTestRecordSchema = z.object({
